@@ -1,0 +1,34 @@
+// Root layout: pages/, components/, composables/, stores/, utils/ sit beside server/ at the top level.
+export default defineNuxtConfig({
+  compatibilityDate: '2026-11-01',
+  srcDir: '.',
+  dir: { app: 'app' },
+  serverDir: 'server',
+  telemetry: false,
+  devtools: { enabled: false },
+  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils'],
+  css: ['~/assets/css/main.css'],
+  typescript: { strict: true },
+  imports: { dirs: ['stores'] },
+  app: {
+    head: {
+      htmlAttrs: { lang: 'en' },
+      title: 'Shelfstead',
+      meta: [
+        { name: 'viewport', content: 'width=device-width, initial-scale=1' },
+        { name: 'description', content: 'Plan, can, check and shelve home-canned beans safely.' },
+        { name: 'theme-color', content: '#f3f6f1' },
+      ],
+      link: [{ rel: 'icon', type: 'image/svg+xml', href: '/favicon.svg' }],
+    },
+  },
+  runtimeConfig: {
+    dataDir: '',
+    databaseUrl: '',
+    demo: '',
+    session: { maxAge: 60 * 60 * 24 * 14 },
+  },
+  nitro: {
+    experimental: { tasks: true },
+  },
+})
