@@ -1,3 +1,6 @@
+import { cpSync } from 'node:fs'
+import { join, resolve } from 'node:path'
+
 // Root layout: pages/, components/, composables/, stores/, utils/ sit beside server/ at the top level.
 export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
@@ -30,5 +33,11 @@ export default defineNuxtConfig({
   },
   nitro: {
     experimental: { tasks: true },
+    hooks: {
+      // `nuxt build` does not carry the SQL migrations into .output: copy them beside the server.
+      compiled(nitro) {
+        cpSync(resolve('server/database/migrations'), join(nitro.options.output.serverDir, 'migrations'), { recursive: true })
+      },
+    },
   },
 })

@@ -1,0 +1,25 @@
+import { sql } from 'drizzle-orm'
+import { RegisterSchema } from '../../../utils/schemas/auth'
+
+/** Create an account and its household; the new user is the household's owner and is signed in. */
+export default defineEventHandler(async (event) => {
+  const body = await readValidatedBody(event, validateWith(RegisterSchema))
+  const db = await useDB()
+  const [existing] = await db.select({ id: tables.users.id }).from(tables.users)
+    .where(sql`lower(${tables.users.email}) = ${body.email}`)
+  if (existing) {
+    throw createError({ statusCode: 409, message: 'An account with that e-mail already exists. Sign in instead.' })
+  }
+  const passwordHash = await hashPassword(body.password)
+  const user = await db.transaction(async (tx) => {
+    const [created] = await tx.insert(tables.users)
+      .values({ email: body.email, name: body.name, passwordHash })
+      .returning()
+    const [household] = await tx.insert(tables.households).values({ name: body.householdName }).returning()
+    await tx.insert(tables.memberships).values({ userId: created!.id, householdId: household!.id, role: 'owner' })
+    return created!
+  })
+  await setUserSession(event, { user: { id: user.id, email: user.email, name: user.name, isAdmin: user.isAdmin } })
+  setResponseStatus(event, 201)
+  return { user: publicUser(user), households: await householdsOf(user.id) }
+})

@@ -1,0 +1,214 @@
+import { relations, sql } from 'drizzle-orm'
+import {
+  boolean,
+  date,
+  doublePrecision,
+  index,
+  integer,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core'
+
+const timestamps = {
+  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+}
+
+export const roles = ['helper', 'canner', 'owner'] as const
+export type Role = (typeof roles)[number]
+export const gaugeTypes = ['dial', 'weighted'] as const
+export type GaugeType = (typeof gaugeTypes)[number]
+export const unitSystems = ['us', 'metric'] as const
+export type UnitSystem = (typeof unitSystems)[number]
+
+// ---------------------------------------------------------------------------
+// People and households
+
+export const users = pgTable('users', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  email: text('email').notNull(),
+  name: text('name').notNull(),
+  passwordHash: text('password_hash').notNull(),
+  isAdmin: boolean('is_admin').notNull().default(false),
+  ...timestamps,
+}, t => [uniqueIndex('users_email_unique').on(sql`lower(${t.email})`)])
+
+export const households = pgTable('households', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  name: text('name').notNull(),
+  altitudeFt: integer('altitude_ft').notNull().default(0),
+  unitSystem: text('unit_system', { enum: unitSystems }).notNull().default('us'),
+  /** What the household pays for one store-bought can of cooked beans, in cents. */
+  storeCanPriceCents: integer('store_can_price_cents').notNull().default(129),
+  /** How many canning seasons a jar is expected to serve; jar cost is spread over them. */
+  jarUses: integer('jar_uses').notNull().default(10),
+  coolDownPintMinutes: integer('cool_down_pint_minutes').notNull().default(30),
+  coolDownQuartMinutes: integer('cool_down_quart_minutes').notNull().default(45),
+  bestByMonths: integer('best_by_months').notNull().default(12),
+  isDemo: boolean('is_demo').notNull().default(false),
+  ...timestamps,
+})
+
+export const memberships = pgTable('memberships', {
+  userId: uuid('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  role: text('role', { enum: roles }).notNull(),
+  ...timestamps,
+}, t => [
+  primaryKey({ columns: [t.userId, t.householdId] }),
+  index('memberships_household_idx').on(t.householdId),
+])
+
+// ---------------------------------------------------------------------------
+// Published reference data (shared by every household). Sources live in columns.
+
+export const jarSizes = pgTable('jar_sizes', {
+  id: text('id').primaryKey(),
+  /** Size family used by process tables: half-pint, pint, pint-and-a-half, quart, half-gallon. */
+  sizeKey: text('size_key').notNull(),
+  name: text('name').notNull(),
+  capacityMl: doublePrecision('capacity_ml').notNull(),
+  capacitySource: text('capacity_source').notNull(),
+  outsideDiameterMm: doublePrecision('outside_diameter_mm').notNull(),
+  heightMm: doublePrecision('height_mm').notNull(),
+  /** Outside dimensions are not published by any agency: typical values, editable. */
+  dimensionsNote: text('dimensions_note').notNull(),
+  mouth: text('mouth', { enum: ['regular', 'wide'] }).notNull(),
+  sortOrder: integer('sort_order').notNull().default(0),
+})
+
+export const ingredients = pgTable('ingredients', {
+  id: text('id').primaryKey(),
+  name: text('name').notNull(),
+  /** 'dry' legumes are measured by the cup and swell; 'fresh' ones are bought by weight in the pod. */
+  form: text('form', { enum: ['dry', 'fresh'] }).notNull().default('dry'),
+  gramsPerCup: doublePrecision('grams_per_cup').notNull(),
+  gramsPerCupSource: text('grams_per_cup_source').notNull(),
+  /** Hydrated volume / dry volume. */
+  expansionRatio: doublePrecision('expansion_ratio').notNull(),
+  expansionSource: text('expansion_source').notNull(),
+})
+
+export const recipes = pgTable('recipes', {
+  id: text('id').primaryKey(),
+  /** Null for the shared library of tested recipes; set for a household's house recipe. */
+  householdId: uuid('household_id').references(() => households.id, { onDelete: 'cascade' }),
+  name: text('name').notNull(),
+  status: text('status', { enum: ['tested', 'house'] }).notNull(),
+  packStyle: text('pack_style', { enum: ['hot', 'raw', 'dry'] }).notNull(),
+  ingredientId: text('ingredient_id').notNull().references(() => ingredients.id),
+  headspaceMm: doublePrecision('headspace_mm').notNull(),
+  /** Largest fraction of the jar the hydrated solids may take. */
+  solidsFillFraction: doublePrecision('solids_fill_fraction').notNull(),
+  /** 'published': per-jar dry amount from the recipe; 'cap': the dry-pack fill cap. */
+  fillBasis: text('fill_basis', { enum: ['cap', 'published'] }).notNull(),
+  summary: text('summary').notNull().default(''),
+  steps: text('steps').notNull().default(''),
+  source: text('source').notNull(),
+  caution: text('caution'),
+  createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+  ...timestamps,
+}, t => [index('recipes_household_idx').on(t.householdId)])
+
+/** Per jar size: the published dry amount, optional salt and process minutes. */
+export const recipeJarSpecs = pgTable('recipe_jar_specs', {
+  recipeId: text('recipe_id').notNull().references(() => recipes.id, { onDelete: 'cascade' }),
+  sizeKey: text('size_key').notNull(),
+  dryGrams: doublePrecision('dry_grams'),
+  saltTsp: doublePrecision('salt_tsp'),
+  processMinutes: integer('process_minutes'),
+}, t => [primaryKey({ columns: [t.recipeId, t.sizeKey] })])
+
+export const recipePressureBands = pgTable('recipe_pressure_bands', {
+  recipeId: text('recipe_id').notNull().references(() => recipes.id, { onDelete: 'cascade' }),
+  gaugeType: text('gauge_type', { enum: gaugeTypes }).notNull(),
+  minFt: integer('min_ft').notNull(),
+  maxFt: integer('max_ft').notNull(),
+  psi: doublePrecision('psi').notNull(),
+  source: text('source').notNull(),
+}, t => [primaryKey({ columns: [t.recipeId, t.gaugeType, t.minFt] })])
+
+// ---------------------------------------------------------------------------
+// Household equipment and prices
+
+export const canners = pgTable('canners', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  name: text('name').notNull(),
+  innerDiameterMm: doublePrecision('inner_diameter_mm').notNull(),
+  usableHeightMm: doublePrecision('usable_height_mm').notNull(),
+  rackThicknessMm: doublePrecision('rack_thickness_mm').notNull().default(6),
+  gaugeType: text('gauge_type', { enum: gaugeTypes }).notNull(),
+  maxLayers: integer('max_layers').notNull().default(1),
+  waterDepthMm: doublePrecision('water_depth_mm').notNull().default(76),
+  lastGaugeTestAt: date('last_gauge_test_at'),
+  ...timestamps,
+}, t => [index('canners_household_idx').on(t.householdId)])
+
+export const priceKinds = ['ingredient', 'salt', 'lid', 'jar', 'vinegar'] as const
+export type PriceKind = (typeof priceKinds)[number]
+
+export const priceItems = pgTable('price_items', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  kind: text('kind', { enum: priceKinds }).notNull(),
+  label: text('label').notNull(),
+  ingredientId: text('ingredient_id').references(() => ingredients.id),
+  jarSizeId: text('jar_size_id').references(() => jarSizes.id),
+  mouth: text('mouth', { enum: ['regular', 'wide'] }),
+  /** Package contents: grams (dry goods, salt), millilitres (vinegar) or a count (lids, jars). */
+  packageGrams: doublePrecision('package_grams'),
+  packageMl: doublePrecision('package_ml'),
+  packCount: integer('pack_count'),
+  priceCents: integer('price_cents').notNull(),
+  ...timestamps,
+}, t => [index('price_items_household_idx').on(t.householdId)])
+
+export const jarStock = pgTable('jar_stock', {
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  jarSizeId: text('jar_size_id').notNull().references(() => jarSizes.id),
+  count: integer('count').notNull().default(0),
+  ...timestamps,
+}, t => [primaryKey({ columns: [t.householdId, t.jarSizeId] })])
+
+// ---------------------------------------------------------------------------
+// Relations
+
+export const usersRelations = relations(users, ({ many }) => ({ memberships: many(memberships) }))
+export const householdsRelations = relations(households, ({ many }) => ({
+  memberships: many(memberships),
+  canners: many(canners),
+  priceItems: many(priceItems),
+  jarStock: many(jarStock),
+}))
+export const membershipsRelations = relations(memberships, ({ one }) => ({
+  user: one(users, { fields: [memberships.userId], references: [users.id] }),
+  household: one(households, { fields: [memberships.householdId], references: [households.id] }),
+}))
+export const recipesRelations = relations(recipes, ({ one, many }) => ({
+  ingredient: one(ingredients, { fields: [recipes.ingredientId], references: [ingredients.id] }),
+  jarSpecs: many(recipeJarSpecs),
+  pressureBands: many(recipePressureBands),
+}))
+export const recipeJarSpecsRelations = relations(recipeJarSpecs, ({ one }) => ({
+  recipe: one(recipes, { fields: [recipeJarSpecs.recipeId], references: [recipes.id] }),
+}))
+export const recipePressureBandsRelations = relations(recipePressureBands, ({ one }) => ({
+  recipe: one(recipes, { fields: [recipePressureBands.recipeId], references: [recipes.id] }),
+}))
+export const cannersRelations = relations(canners, ({ one }) => ({
+  household: one(households, { fields: [canners.householdId], references: [households.id] }),
+}))
+
+export type User = typeof users.$inferSelect
+export type Household = typeof households.$inferSelect
+export type Membership = typeof memberships.$inferSelect
+export type JarSizeRow = typeof jarSizes.$inferSelect
+export type IngredientRow = typeof ingredients.$inferSelect
+export type RecipeRow = typeof recipes.$inferSelect
+export type CannerRow = typeof canners.$inferSelect
+export type PriceItemRow = typeof priceItems.$inferSelect

@@ -1,0 +1,82 @@
+import { existsSync } from 'node:fs'
+import { dirname, join, resolve } from 'node:path'
+import { PGlite } from '@electric-sql/pglite'
+import { drizzle as drizzlePglite, type PgliteDatabase } from 'drizzle-orm/pglite'
+import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator'
+import { drizzle as drizzlePg } from 'drizzle-orm/node-postgres'
+import { migrate as migratePg } from 'drizzle-orm/node-postgres/migrator'
+import pg from 'pg'
+import * as schema from '../database/schema'
+
+export const tables = schema
+
+/**
+ * Both drivers expose the same PgDatabase API; the PGlite type stands for both
+ * (node-postgres differs only in its raw query-result type, which we never use).
+ */
+export type Database = PgliteDatabase<typeof schema>
+
+interface OpenDatabase {
+  db: Database
+  close: () => Promise<void>
+}
+
+let opening: Promise<OpenDatabase> | undefined
+let ready = false
+
+/** Where the drizzle-kit migrations are: copied next to the built server, or in the source tree. */
+export function migrationsFolder(): string {
+  const candidates = [
+    process.env.SHELFSTEAD_MIGRATIONS_DIR,
+    process.argv[1] ? join(dirname(resolve(process.argv[1])), 'migrations') : undefined,
+    resolve('server/database/migrations'),
+  ].filter((c): c is string => Boolean(c))
+  const found = candidates.find(c => existsSync(join(c, 'meta', '_journal.json')))
+  if (!found) throw new Error(`No database migrations found (looked in ${candidates.join(', ')}).`)
+  return found
+}
+
+async function open(options: { dataDir: string, databaseUrl?: string }): Promise<OpenDatabase> {
+  const folder = migrationsFolder()
+  if (options.databaseUrl) {
+    const pool = new pg.Pool({ connectionString: options.databaseUrl })
+    const db = drizzlePg(pool, { schema, casing: 'snake_case' })
+    await migratePg(db, { migrationsFolder: folder })
+    return { db: db as unknown as Database, close: () => pool.end() }
+  }
+  const client = await PGlite.create(join(options.dataDir, 'pglite'))
+  const db = drizzlePglite(client, { schema, casing: 'snake_case' })
+  await migratePglite(db, { migrationsFolder: folder })
+  return { db, close: () => client.close() }
+}
+
+/** Open the database once, apply migrations, then run `afterMigrate` (seeding) before anyone may use it. */
+export function startDatabase(
+  options: { dataDir: string, databaseUrl?: string },
+  afterMigrate: (db: Database) => Promise<void>,
+): Promise<OpenDatabase> {
+  opening ??= open(options).then(async (opened) => {
+    await afterMigrate(opened.db)
+    ready = true
+    return opened
+  })
+  return opening
+}
+
+/** The database, once migrations and seeding are done. Every route awaits this. */
+export async function useDB(): Promise<Database> {
+  if (!opening) throw new Error('The database has not been started.')
+  return (await opening).db
+}
+
+export function isDatabaseReady(): boolean {
+  return ready
+}
+
+export async function closeDatabase(): Promise<void> {
+  if (!opening) return
+  const opened = await opening.catch(() => undefined)
+  opening = undefined
+  ready = false
+  await opened?.close()
+}
