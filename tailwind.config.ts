@@ -25,8 +25,8 @@ const basePlugin = plugin(({ addBase, addVariant, theme }) => {
       borderRadius: '2px',
     },
     '@media print': {
-      'html, body': { background: '#ffffff !important', color: '#000000 !important' },
-      '*, *::before, *::after': { boxShadow: 'none !important', textShadow: 'none !important' },
+      'html, body, [class*="bg-glass"]': { background: '#ffffff !important' },
+      '*, *::before, *::after': { color: '#000000 !important', boxShadow: 'none !important', textShadow: 'none !important' },
       'nav, .no-print, button.no-print': { display: 'none !important' },
       'a[href]': { color: '#000000', textDecoration: 'none' },
       'table, figure, .ui-card': { breakInside: 'avoid' },
