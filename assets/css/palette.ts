@@ -56,6 +56,8 @@ export const pairings: readonly Pairing[] = [
   { fg: 'brass', bg: 'glass-raised', min: 4.5, use: 'pressure figures and links in cards' },
   { fg: 'brass-deep', bg: 'brass-tint', min: 4.5, use: 'brass badge text' },
   { fg: 'brass-deep', bg: 'glass-sunk', min: 4.5, use: 'active nav item label' },
+  { fg: 'brass-deep', bg: 'glass-raised', min: 4.5, use: 'active bottom tab label' },
+  { fg: 'brass', bg: 'glass-sunk', min: 3, use: 'sorted column arrow in table headers' },
   { fg: 'cream', bg: 'brass', min: 4.5, use: 'primary button label' },
   { fg: 'cream', bg: 'brass-deep', min: 4.5, use: 'primary button label, hovered' },
   { fg: 'cream', bg: 'paprika', min: 4.5, use: 'danger button label' },
