@@ -1,0 +1,61 @@
+/**
+ * Refusals and warnings.
+ *
+ * A refusal is thrown when the planner has no published or household-entered basis for what
+ * was asked (or the request contradicts itself); the API turns it into HTTP 422. Its message
+ * tells a home canner what to change. A warning travels with a plan: `caution` for safety
+ * matters the canner must read, `info` for choices the planner made on their behalf.
+ */
+
+export class PlanningRefusal extends Error {
+  /** Path of the request field at fault, e.g. `lines[0].amount.jars`. */
+  readonly field?: string
+
+  constructor(message: string, field?: string) {
+    super(message)
+    this.name = 'PlanningRefusal'
+    if (field !== undefined) this.field = field
+  }
+}
+
+export type WarningLevel = 'caution' | 'info'
+
+export interface PlanWarning {
+  code: string
+  level: WarningLevel
+  message: string
+  field?: string
+}
+
+/** A safety point the canner must read. */
+export function caution(code: string, message: string, field?: string): PlanWarning {
+  return field === undefined ? { code, level: 'caution', message } : { code, level: 'caution', message, field }
+}
+
+/** A choice the planner made on the canner's behalf, or a figure worth knowing. */
+export function info(code: string, message: string, field?: string): PlanWarning {
+  return field === undefined ? { code, level: 'info', message } : { code, level: 'info', message, field }
+}
+
+/** Throw unless `value` is a finite number within [min, max] (or above min), whole if asked. */
+export function requireNumber(
+  value: number,
+  field: string,
+  what: string,
+  limits: { min?: number; max?: number; integer?: boolean; above?: boolean } = {},
+): number {
+  const { min = 0, max = Infinity, integer = false, above = false } = limits
+  if (typeof value !== 'number' || !Number.isFinite(value)) {
+    throw new PlanningRefusal(`${what} must be a number.`, field)
+  }
+  if (above ? value <= min : value < min) {
+    throw new PlanningRefusal(`${what} must be ${above ? 'more than' : 'at least'} ${min}; got ${value}.`, field)
+  }
+  if (value > max) {
+    throw new PlanningRefusal(`${what} must be at most ${max}; got ${value}.`, field)
+  }
+  if (integer && !Number.isInteger(value)) {
+    throw new PlanningRefusal(`${what} must be a whole number; got ${value}.`, field)
+  }
+  return value
+}

@@ -1,0 +1,180 @@
+/**
+ * Input shapes of the planning computation. The server maps database rows into these; the
+ * computation works in SI units (mL, g, mm, minutes) plus psi and feet, as the published tables
+ * give them. Money is always integer cents.
+ */
+
+export type JarMouth = 'regular' | 'wide'
+export type GaugeType = 'dial' | 'weighted'
+export type UnitSystem = 'us' | 'metric'
+
+export interface JarSize {
+  id: string
+  /** 'half-pint' | 'pint' | 'pint-and-a-half' | 'quart' | 'half-gallon' … */
+  key: string
+  name: string
+  capacityMl: number
+  outsideDiameterMm: number
+  heightMm: number
+  mouth: JarMouth
+}
+
+export interface Ingredient {
+  id: string
+  name: string
+  /** Dry grams per level US cup (USDA SR Legacy portion weights). */
+  gramsPerCup: number
+  /** Hydrated volume ÷ dry volume. */
+  expansionRatio: number
+  source: string
+}
+
+export interface PerJarAmount {
+  jarKey: string
+  dryGrams?: number
+  saltTsp?: number
+}
+
+export interface ProcessTime {
+  jarKey: string
+  minutes: number
+}
+
+/** Inclusive altitude band in whole feet. */
+export interface PressureBand {
+  gaugeType: GaugeType
+  minFt: number
+  maxFt: number
+  psi: number
+}
+
+export interface Recipe {
+  id: string
+  name: string
+  status: 'tested' | 'house'
+  packStyle: 'hot' | 'raw' | 'dry'
+  ingredientId: string
+  headspaceMm: number
+  /** f: the largest fraction of the jar's capacity the hydrated solids may take. */
+  solidsFillFraction: number
+  /** 'cap': dry volume per jar is the cap f·V/E (or less); 'published': grams from `perJar`. */
+  fillBasis: 'cap' | 'published'
+  perJar: PerJarAmount[]
+  processMinutes: ProcessTime[]
+  pressureBands: PressureBand[]
+  source: string
+  caution?: string
+}
+
+export interface Canner {
+  id: string
+  name: string
+  innerDiameterMm: number
+  usableHeightMm: number
+  rackThicknessMm: number
+  gaugeType: GaugeType
+  maxLayers: number
+  waterDepthMm: number
+  /** ISO date of the last dial-gauge accuracy test, or null if never tested. */
+  lastGaugeTestAt: string | null
+}
+
+export interface IngredientPrice {
+  kind: 'ingredient'
+  ingredientId: string
+  packageGrams: number
+  priceCents: number
+}
+
+export interface SaltPrice {
+  kind: 'salt'
+  packageGrams: number
+  priceCents: number
+}
+
+/** A lid pack for one jar size, or for every jar of one mouth size. */
+export interface LidPrice {
+  kind: 'lid'
+  jarMouth?: JarMouth
+  jarSizeId?: string
+  packCount: number
+  priceCents: number
+}
+
+export interface JarPrice {
+  kind: 'jar'
+  jarSizeId: string
+  packCount: number
+  priceCents: number
+}
+
+export interface VinegarPrice {
+  kind: 'vinegar'
+  packageMl: number
+  priceCents: number
+}
+
+export type PriceItem = IngredientPrice | SaltPrice | LidPrice | JarPrice | VinegarPrice
+
+export interface HouseholdSettings {
+  altitudeFt: number
+  unitSystem: UnitSystem
+  /** Price of one store-bought can of the same product, compared one can per jar. */
+  storeCanPriceCents: number
+  /** Expected uses of one jar, for amortising jars bought for this batch. */
+  jarUses: number
+  /** Natural cool-down to zero pressure; defaults 30 (pints and smaller) and 45 (larger). */
+  coolDownMinutes?: { pint: number; quart: number }
+  jarsOwned: Array<{ jarSizeId: string; count: number }>
+  prices: PriceItem[]
+}
+
+export type LineAmount =
+  | { mode: 'jars'; jars: number }
+  | { mode: 'dryGrams'; grams: number }
+  | { mode: 'packages'; packages: Array<{ grams: number; count: number }> }
+  | { mode: 'consumption'; jarsPerMonth: number; months: number; jarsOnShelf?: number }
+
+export interface PlanLineRequest {
+  recipeId: string
+  jarSizeId: string
+  amount: LineAmount
+  /** Salt per jar in tsp; defaults to the recipe's amount for the jar; 0 for none. */
+  saltTsp?: number
+  /** A smaller dry fill per jar than the cap, for 'cap' recipes only. */
+  dryMlPerJar?: number
+}
+
+export interface PlanRequest {
+  lines: PlanLineRequest[]
+  /** One canner, or two run side by side. */
+  canners: Canner[]
+  /** ISO date-time; its offset (Z, ±hh:mm or none for local wall-clock time) is kept. */
+  startAt?: string
+  altitudeFt: number
+  /** ISO date used for the gauge-test check and the default start. */
+  today?: string
+}
+
+export interface Catalogue {
+  recipes: Recipe[]
+  jarSizes: JarSize[]
+  ingredients: Ingredient[]
+}
+
+/** Minutes of the fixed steps of one canner load (the process and the cool-down vary). */
+export interface StepMinutes {
+  heat: number
+  vent: number
+  pressurise: number
+  waitAfterZero: number
+  unload: number
+}
+
+export interface PlanOptions {
+  /** Gap added to each jar's diameter when packing a layer, in mm (default 6). */
+  clearanceMm?: number
+  stepMinutes?: Partial<StepMinutes>
+  /** Vinegar for wiping rims, per jar (default 5 mL). */
+  vinegarMlPerJar?: number
+}
