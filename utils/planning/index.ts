@@ -8,3 +8,6 @@
 export * from './types'
 export { PlanningRefusal, type PlanWarning, type WarningLevel } from './errors'
 export * from './units'
+export { fillCapMl, gramsForMl, mlForGrams, volumeToHeadspaceMl, perJarFill, type PerJarFill } from './fill'
+export * from './scaling'
+export * from './process'
