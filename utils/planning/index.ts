@@ -11,3 +11,20 @@ export * from './units'
 export { fillCapMl, gramsForMl, mlForGrams, volumeToHeadspaceMl, perJarFill, type PerJarFill } from './fill'
 export * from './scaling'
 export * from './process'
+export {
+  PACKOMANIA_RATIOS,
+  MAX_TABLE_N,
+  MAX_JARS_PER_LAYER,
+  DEFAULT_CLEARANCE_MM,
+  packomaniaRatio,
+  layerRatio,
+  tableJarsPerLayer,
+  drawnPackings,
+  drawnRatio,
+  jarPositions,
+  layoutLayer,
+  layersFor,
+  layoutTimings,
+  type LayerLayout,
+} from './packing'
+export { searchPacking, type Point, type UnitPacking, type SearchOptions } from './packing-search'
