@@ -28,3 +28,18 @@ export {
   type LayerLayout,
 } from './packing'
 export { searchPacking, type Point, type UnitPacking, type SearchOptions } from './packing-search'
+export { buildLoads, spreadEvenly, type CannerFit, type Load, type LoadContent, type LoadLine } from './loads'
+export {
+  DEFAULT_STEP_MINUTES,
+  DEFAULT_COOL_DOWN,
+  STEP_LABELS,
+  buildSchedule,
+  coolDownMinutes,
+  loadMinutes,
+  loadSteps,
+  parseStart,
+  type DayStart,
+  type Schedule,
+  type ScheduleStep,
+  type StepName,
+} from './schedule'
