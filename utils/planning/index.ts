@@ -43,3 +43,14 @@ export {
   type ScheduleStep,
   type StepName,
 } from './schedule'
+export {
+  buildShopping,
+  cheapestCombination,
+  type Combination,
+  type PackageOption,
+  type ShoppingItem,
+  type ShoppingKind,
+  type ShoppingNeeds,
+  type ShoppingPackage,
+} from './shopping'
+export { costSummary, type CostInput, type CostSummary } from './cost'
