@@ -1,6 +1,6 @@
 /**
  * The planning computation: plain TypeScript, plain data in and out, shared by the server
- * routes, the pages and the unit tests.
+ * routes, the pages and the unit tests. Start with `planBatch`.
  *
  * Nuxt auto-imports this file's exports into the app, so only deliberately named pieces are
  * exported here; internal helpers stay in their modules.
@@ -54,3 +54,5 @@ export {
   type ShoppingPackage,
 } from './shopping'
 export { costSummary, type CostInput, type CostSummary } from './cost'
+export * from './results'
+export { planBatch, DEFAULT_VINEGAR_ML_PER_JAR } from './plan'

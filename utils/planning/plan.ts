@@ -1,0 +1,161 @@
+/**
+ * planBatch: from "what to can" to the fill card, loads, canner map, market list, run sheet and
+ * money. Pure: plain data in, plain data out; throws PlanningRefusal when it must refuse.
+ *
+ * Order of work: check the request; plan each line (fill, jars, time, pressure); build the loads
+ * and the day; buy what is missing; price the batch; add the standing cautions.
+ */
+import { costSummary } from './cost'
+import { PlanningRefusal, info, type PlanWarning } from './errors'
+import { buildLoads } from './loads'
+import { planLine } from './lines'
+import { DEFAULT_CLEARANCE_MM, layersFor, layoutLayer } from './packing'
+import { bandAltitude } from './process'
+import type { CannerLayout, LineResult, LoadResult, PlanResult } from './results'
+import { MAX_JARS_PER_PLAN } from './scaling'
+import { DEFAULT_STEP_MINUTES, buildSchedule, coolDownMinutes, loadMinutes, parseStart } from './schedule'
+import { buildShopping } from './shopping'
+import type { Canner, Catalogue, HouseholdSettings, JarSize, PlanOptions, PlanRequest, UnitSystem } from './types'
+import { formatVolume } from './units'
+import { validateHousehold, validateOptions, validateRequest } from './validate'
+import { standingWarnings } from './warnings'
+
+/** Rim-wiping vinegar per jar: a splash on a clean cloth (our estimate; no published figure). */
+export const DEFAULT_VINEGAR_ML_PER_JAR = 5
+
+/** Water for the canner's depth over its floor, its inside taken as a cylinder (mL). */
+const cannerWaterMl = (c: Canner): number => (Math.PI * (c.innerDiameterMm / 2) ** 2 * c.waterDepthMm) / 1000
+
+/** Sum `value` over items by `key`. */
+function sumBy<T>(items: readonly T[], key: (t: T) => string, value: (t: T) => number): Map<string, number> {
+  const out = new Map<string, number>()
+  for (const t of items) out.set(key(t), (out.get(key(t)) ?? 0) + value(t))
+  return out
+}
+
+/**
+ * Plan a canning batch. Lines sharing a jar size and pressure share loads; each canner in
+ * `request.canners` runs its loads back to back and canners run side by side. Throws a
+ * PlanningRefusal (with the field at fault) when the plan has no published or household basis
+ * or the request contradicts itself; otherwise every warning the plan needs is in `warnings`.
+ */
+export function planBatch(
+  request: PlanRequest,
+  catalogue: Catalogue,
+  household: HouseholdSettings,
+  options: PlanOptions = {},
+): PlanResult {
+  validateRequest(request)
+  validateHousehold(household)
+  validateOptions(options)
+  const system: UnitSystem = household.unitSystem === 'metric' ? 'metric' : 'us'
+  const clearanceMm = options.clearanceMm ?? DEFAULT_CLEARANCE_MM
+  const steps = { ...DEFAULT_STEP_MINUTES, ...options.stepMinutes }
+  const today = request.today ?? new Date().toISOString().slice(0, 10)
+  const start = parseStart(request.startAt, request.today)
+  const altitude = bandAltitude(request.altitudeFt, 'altitudeFt')
+  const canners = request.canners
+
+  const fits = new Map<string, CannerLayout>()
+  const fit = (c: Canner, jar: JarSize): CannerLayout => {
+    const key = `${c.id}|${jar.id}`
+    const known = fits.get(key)
+    if (known) return known
+    const layer = layoutLayer(c.innerDiameterMm, jar.outsideDiameterMm, clearanceMm)
+    const layers = layersFor(c.usableHeightMm, c.rackThicknessMm, jar.heightMm, c.maxLayers)
+    const made = { ...layer, cannerId: c.id, jarSizeId: jar.id, layers }
+    fits.set(key, made)
+    return made
+  }
+
+  const context = { catalogue, canners, feet: altitude.feet, clearanceMm, system, fit }
+  const planned = request.lines.map((line, i) => planLine(line, i, context))
+  const lines = planned.map((p) => p.result)
+  const totalJars = lines.reduce((s, l) => s + l.jars, 0)
+  if (totalJars > MAX_JARS_PER_PLAN) {
+    throw new PlanningRefusal(
+      `${totalJars} jars is more than one plan can hold (${MAX_JARS_PER_PLAN}); split it into several canning days.`,
+      'lines',
+    )
+  }
+
+  const jarOf = (id: string): JarSize => catalogue.jarSizes.find((j) => j.id === id)!
+  const cannerOf = (id: string): Canner => canners.find((c) => c.id === id)!
+  const cool = (jarSizeId: string): number => coolDownMinutes(jarOf(jarSizeId).capacityMl, household.coolDownMinutes)
+  const loads: LoadResult[] = buildLoads(
+    planned.map((p) => p.load),
+    canners.map((c) => c.id),
+    (cannerId, jarSizeId) => fit(cannerOf(cannerId), jarOf(jarSizeId)),
+    (jarSizeId, minutes) => loadMinutes(minutes, cool(jarSizeId), steps),
+  ).map((load) => ({ ...load, gaugeType: cannerOf(load.cannerId).gaugeType, coolMinutes: cool(load.jarSizeId) }))
+  const layouts = [...new Set(loads.map((l) => `${l.cannerId}|${l.jarSizeId}`))].map((key) => fits.get(key)!)
+  const schedule = buildSchedule(loads, start, steps)
+
+  const ingredientOf = (l: LineResult): string => planned[l.lineIndex]!.recipe.ingredientId
+  const jarsBySize = sumBy(lines, (l) => l.jarSizeId, (l) => l.jars)
+  const saltGrams = lines.reduce((s, l) => s + l.saltGramsTotal, 0)
+  const vinegarMl = totalJars * (options.vinegarMlPerJar ?? DEFAULT_VINEGAR_ML_PER_JAR)
+  const buying = lines.filter((l) => l.suppliedGrams === null)
+  const shopping = buildShopping(
+    { ingredientGrams: sumBy(buying, ingredientOf, (l) => l.dryGramsTotal), saltGrams, jarsBySize, vinegarMl },
+    household,
+    catalogue.ingredients,
+    catalogue.jarSizes,
+    system,
+  )
+  for (const item of shopping.items) {
+    const last = buying.filter((l) => item.kind === 'ingredient' && ingredientOf(l) === item.ref).pop()
+    if (last) last.leftoverGrams = item.leftover
+  }
+
+  const eaten = planned.flatMap((p) => (p.load.jarsPerMonth === null ? [] : [p.load.jarsPerMonth]))
+  const cost = costSummary(
+    {
+      jars: totalJars,
+      gramsUsed: sumBy(lines, ingredientOf, (l) => l.dryGramsTotal),
+      saltGrams,
+      vinegarMl,
+      jarsBySize,
+      jarsPerMonth: eaten.length ? eaten.reduce((s, n) => s + n, 0) : null,
+    },
+    shopping.items,
+    household,
+    catalogue.jarSizes,
+  )
+
+  const recipes = [...new Set(planned.map((p) => p.recipe))]
+  const warnings: PlanWarning[] = [
+    ...altitude.warnings,
+    ...planned.flatMap((p) => p.warnings),
+    ...loads.flatMap((l) => (l.note ? [info('mixed-load', `Load ${l.index}: ${l.note}`)] : [])),
+    ...shopping.warnings,
+    ...standingWarnings({ recipes, canners, loads, jarSizes: catalogue.jarSizes, feet: altitude.feet, today, system }),
+  ]
+  const kettleMl = lines.reduce((s, l) => s + l.waterMlTotal, 0)
+  const cannersUsed = canners.filter((c) => loads.some((l) => l.cannerId === c.id))
+  return {
+    lines,
+    loads,
+    layout: layouts[0]!,
+    layouts,
+    shopping: shopping.items,
+    schedule,
+    cost,
+    water: {
+      kettleMl,
+      kettleDisplay: formatVolume(kettleMl, system),
+      canners: cannersUsed.map((c) => {
+        const mlPerLoad = cannerWaterMl(c)
+        return { cannerId: c.id, mlPerLoad, display: formatVolume(mlPerLoad, system) }
+      }),
+    },
+    totals: {
+      jars: totalJars,
+      loads: loads.length,
+      dryGrams: lines.reduce((s, l) => s + l.dryGramsTotal, 0),
+      saltGrams,
+    },
+    altitudeFt: altitude.feet,
+    warnings: [...warnings.filter((w) => w.level === 'caution'), ...warnings.filter((w) => w.level !== 'caution')],
+  }
+}
