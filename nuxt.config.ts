@@ -11,6 +11,8 @@ export default defineNuxtConfig({
   devtools: { enabled: false },
   modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils'],
   css: ['~/assets/css/main.css'],
+  // main.css holds the @tailwind directives; stop the module from injecting a second copy.
+  tailwindcss: { cssPath: false },
   typescript: { strict: true },
   imports: { dirs: ['stores'] },
   app: {
@@ -31,13 +33,12 @@ export default defineNuxtConfig({
     demo: '',
     session: { maxAge: 60 * 60 * 24 * 14 },
   },
-  nitro: {
-    experimental: { tasks: true },
-    hooks: {
-      // `nuxt build` does not carry the SQL migrations into .output: copy them beside the server.
-      compiled(nitro) {
+  hooks: {
+    // `nuxt build` does not carry the SQL migrations into .output: copy them beside the server.
+    'nitro:init'(nitro) {
+      nitro.hooks.hook('compiled', () => {
         cpSync(resolve('server/database/migrations'), join(nitro.options.output.serverDir, 'migrations'), { recursive: true })
-      },
+      })
     },
   },
 })

@@ -1,3 +1,4 @@
+/// <reference path="../types/auth.d.ts" />
 import type { H3Event } from 'h3'
 import { and, eq } from 'drizzle-orm'
 import { roleRank, type HouseholdRole } from '../../utils/schemas/household'

@@ -27,8 +27,8 @@ export async function seedDemoIfEmpty(
   db: Database,
   hashPassword: (password: string) => Promise<string>,
 ): Promise<boolean> {
-  const [{ users }] = await db.select({ users: count() }).from(t.users)
-  if (users > 0) return false
+  const [row] = await db.select({ users: count() }).from(t.users)
+  if ((row?.users ?? 0) > 0) return false
   await seedDemoHousehold(db, hashPassword)
   return true
 }

@@ -90,8 +90,8 @@ describe('reference seed', () => {
     const fakeHash = async (p: string) => `hashed:${p}`
     expect(await seedDemoIfEmpty(db, fakeHash)).toBe(true)
     expect(await seedDemoIfEmpty(db, fakeHash)).toBe(false)
-    const [{ n }] = await db.select({ n: count() }).from(schema.households)
-    expect(n).toBe(1)
+    const [households] = await db.select({ n: count() }).from(schema.households)
+    expect(households?.n).toBe(1)
     const members = await db.select().from(schema.memberships)
     expect(members.map(m => m.role).sort()).toEqual(['canner', 'helper', 'owner'])
   })
