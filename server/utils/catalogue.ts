@@ -1,0 +1,107 @@
+import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm'
+import type { Canner, Catalogue, HouseholdSettings, PriceItem, Recipe } from '../../utils/planning'
+import type { Database } from './database'
+
+/** Recipes a household may use: the shared library plus its own house recipes. */
+export function visibleRecipes(householdId: string) {
+  return or(isNull(tables.recipes.householdId), eq(tables.recipes.householdId, householdId))
+}
+
+/**
+ * Read the reference data into the planning computation's shapes. Recipe rows keep their
+ * descriptive fields (source, summary, caution …) beside the planning fields.
+ */
+export async function loadCatalogue(db: Database, householdId: string) {
+  const [recipeRows, jarRows, ingredientRows] = await Promise.all([
+    db.select().from(tables.recipes).where(visibleRecipes(householdId)).orderBy(asc(tables.recipes.status), asc(tables.recipes.name)),
+    db.select().from(tables.jarSizes).orderBy(asc(tables.jarSizes.sortOrder)),
+    db.select().from(tables.ingredients).orderBy(asc(tables.ingredients.name)),
+  ])
+  const ids = recipeRows.map(r => r.id)
+  const [specs, bands] = ids.length
+    ? await Promise.all([
+        db.select().from(tables.recipeJarSpecs).where(inArray(tables.recipeJarSpecs.recipeId, ids)),
+        db.select().from(tables.recipePressureBands).where(inArray(tables.recipePressureBands.recipeId, ids)),
+      ])
+    : [[], []]
+
+  const recipes = recipeRows.map(row => ({
+    ...row,
+    caution: row.caution ?? undefined,
+    perJar: specs.filter(s => s.recipeId === row.id && (s.dryGrams !== null || s.saltTsp !== null))
+      .map(s => ({ jarKey: s.sizeKey, dryGrams: s.dryGrams ?? undefined, saltTsp: s.saltTsp ?? undefined })),
+    processMinutes: specs.filter(s => s.recipeId === row.id && s.processMinutes !== null)
+      .map(s => ({ jarKey: s.sizeKey, minutes: s.processMinutes! })),
+    pressureBands: bands.filter(b => b.recipeId === row.id)
+      .map(b => ({ gaugeType: b.gaugeType, minFt: b.minFt, maxFt: b.maxFt, psi: b.psi, source: b.source })),
+  }))
+  const catalogue: Catalogue = {
+    recipes: recipes satisfies Recipe[],
+    jarSizes: jarRows.map(j => ({ ...j, key: j.sizeKey })),
+    ingredients: ingredientRows.map(i => ({ ...i, source: i.gramsPerCupSource })),
+  }
+  return { catalogue, recipes, jarSizes: jarRows, ingredients: ingredientRows }
+}
+
+export function toPlanningCanner(row: typeof tables.canners.$inferSelect): Canner {
+  return {
+    id: row.id,
+    name: row.name,
+    innerDiameterMm: row.innerDiameterMm,
+    usableHeightMm: row.usableHeightMm,
+    rackThicknessMm: row.rackThicknessMm,
+    gaugeType: row.gaugeType,
+    maxLayers: row.maxLayers,
+    waterDepthMm: row.waterDepthMm,
+    lastGaugeTestAt: row.lastGaugeTestAt,
+  }
+}
+
+export async function loadCanners(db: Database, householdId: string) {
+  return db.select().from(tables.canners)
+    .where(eq(tables.canners.householdId, householdId))
+    .orderBy(asc(tables.canners.name))
+}
+
+/** A household's own canner, or a 404 that does not reveal other households' canners. */
+export async function requireCanner(db: Database, householdId: string, cannerId: string) {
+  const [row] = await db.select().from(tables.canners)
+    .where(and(eq(tables.canners.id, cannerId), eq(tables.canners.householdId, householdId)))
+  if (!row) throw createError({ statusCode: 404, message: 'No such canner in this household.' })
+  return row
+}
+
+function toPriceItem(row: typeof tables.priceItems.$inferSelect): PriceItem | null {
+  switch (row.kind) {
+    case 'ingredient':
+      return row.ingredientId && row.packageGrams ? { kind: 'ingredient', ingredientId: row.ingredientId, packageGrams: row.packageGrams, priceCents: row.priceCents } : null
+    case 'salt':
+      return row.packageGrams ? { kind: 'salt', packageGrams: row.packageGrams, priceCents: row.priceCents } : null
+    case 'lid':
+      return row.packCount ? { kind: 'lid', jarMouth: row.mouth ?? undefined, jarSizeId: row.jarSizeId ?? undefined, packCount: row.packCount, priceCents: row.priceCents } : null
+    case 'jar':
+      return row.jarSizeId && row.packCount ? { kind: 'jar', jarSizeId: row.jarSizeId, packCount: row.packCount, priceCents: row.priceCents } : null
+    case 'vinegar':
+      return row.packageMl ? { kind: 'vinegar', packageMl: row.packageMl, priceCents: row.priceCents } : null
+  }
+}
+
+/** The household's settings, prices and empty jars in the planning computation's shape. */
+export async function loadHouseholdSettings(db: Database, householdId: string): Promise<HouseholdSettings & { name: string }> {
+  const [household] = await db.select().from(tables.households).where(eq(tables.households.id, householdId))
+  if (!household) throw createError({ statusCode: 404, message: 'No such household.' })
+  const [prices, stock] = await Promise.all([
+    db.select().from(tables.priceItems).where(eq(tables.priceItems.householdId, householdId)),
+    db.select().from(tables.jarStock).where(eq(tables.jarStock.householdId, householdId)),
+  ])
+  return {
+    name: household.name,
+    altitudeFt: household.altitudeFt,
+    unitSystem: household.unitSystem,
+    storeCanPriceCents: household.storeCanPriceCents,
+    jarUses: household.jarUses,
+    coolDownMinutes: { pint: household.coolDownPintMinutes, quart: household.coolDownQuartMinutes },
+    jarsOwned: stock.map(s => ({ jarSizeId: s.jarSizeId, count: s.count })),
+    prices: prices.map(toPriceItem).filter((p): p is PriceItem => p !== null),
+  }
+}
