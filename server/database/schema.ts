@@ -5,6 +5,7 @@ import {
   doublePrecision,
   index,
   integer,
+  jsonb,
   pgTable,
   primaryKey,
   text,
@@ -12,6 +13,7 @@ import {
   uniqueIndex,
   uuid,
 } from 'drizzle-orm/pg-core'
+import type { PlanRequestBody } from '../../utils/schemas/plan'
 
 const timestamps = {
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
@@ -212,3 +214,37 @@ export type IngredientRow = typeof ingredients.$inferSelect
 export type RecipeRow = typeof recipes.$inferSelect
 export type CannerRow = typeof canners.$inferSelect
 export type PriceItemRow = typeof priceItems.$inferSelect
+
+// ---------------------------------------------------------------------------
+// Plans
+
+export const planStatuses = ['planned', 'in-progress', 'done'] as const
+
+/** A saved batch plan: the request only; the result is recomputed from current data on read. */
+export const plans = pgTable('plans', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  name: text('name').notNull(),
+  status: text('status', { enum: planStatuses }).notNull().default('planned'),
+  request: jsonb('request').$type<PlanRequestBody>().notNull(),
+  /** Jars and recipe names at save time, for lists; the plan itself is always recomputed. */
+  summary: jsonb('summary').$type<{ jars: number, loads: number, recipes: string[] }>().notNull(),
+  createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+  ...timestamps,
+}, t => [index('plans_household_idx').on(t.householdId, t.updatedAt)])
+
+/** Market list check-offs, shared by every member of the household. */
+export const marketChecks = pgTable('market_checks', {
+  planId: uuid('plan_id').notNull().references(() => plans.id, { onDelete: 'cascade' }),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  itemKey: text('item_key').notNull(),
+  checkedBy: uuid('checked_by').references(() => users.id, { onDelete: 'set null' }),
+  checkedAt: timestamp('checked_at', { withTimezone: true }).notNull().defaultNow(),
+}, t => [primaryKey({ columns: [t.planId, t.itemKey] })])
+
+export const plansRelations = relations(plans, ({ one, many }) => ({
+  household: one(households, { fields: [plans.householdId], references: [households.id] }),
+  checks: many(marketChecks),
+}))
+
+export type PlanRow = typeof plans.$inferSelect
