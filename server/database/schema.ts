@@ -12,6 +12,7 @@ import {
   timestamp,
   uniqueIndex,
   uuid,
+  type AnyPgColumn,
 } from 'drizzle-orm/pg-core'
 import type { PlanRequestBody } from '../../utils/schemas/plan'
 
@@ -112,6 +113,10 @@ export const recipes = pgTable('recipes', {
   steps: text('steps').notNull().default(''),
   source: text('source').notNull(),
   caution: text('caution'),
+  /** A house recipe's basis: the tested recipe whose process table it copies. */
+  basedOnRecipeId: text('based_on_recipe_id').references((): AnyPgColumn => recipes.id),
+  /** The canner's own words, appended to a house recipe's fixed untested caution. */
+  cautionNote: text('caution_note'),
   createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
   ...timestamps,
 }, t => [index('recipes_household_idx').on(t.householdId)])
