@@ -23,7 +23,10 @@ export interface CostSummary {
   total: number
   storeEquivalent: number
   saving: number
-  /** Saving over a year of the household's use, when the plan was made from consumption. */
+  /**
+   * Saving over a year of the household's use, when some line was planned from consumption:
+   * (store price − this batch's average cost per jar) × jars eaten per month × 12.
+   */
   savingPerYear: number | null
   shoppingTotal: number
   breakdown: { goods: number; salt: number; lids: number; vinegar: number; jars: number }

@@ -113,15 +113,16 @@ export function formatMass(grams: number, system: UnitSystem): string {
 }
 
 /**
- * Liquid volume for display: cups as a kitchen fraction below 4 cups, else quarts to one
- * decimal (US); mL to the nearest 5 below a litre, else litres to two decimals (metric).
+ * Liquid volume for display: cups as a kitchen fraction below a quart, else quarts to one
+ * decimal (US; a quart bottle reads "1.0 qt", not "4 cups"); mL to the nearest 5 below a
+ * litre, else litres to two decimals (metric).
  */
 export function formatVolume(ml: number, system: UnitSystem): string {
   if (system === 'metric') {
     return ml < 1000 ? `${grouped(Math.round(ml / 5) * 5)} mL` : `${grouped(ml / 1000, 2)} L`
   }
   const cups = mlToCups(ml)
-  if (cups < 4) return kitchenMeasure(cups, 'cup').text
+  if (cups < 3.99) return kitchenMeasure(cups, 'cup').text
   return `${grouped(convert(ml).from('ml').to('qt'), 1)} qt`
 }
 

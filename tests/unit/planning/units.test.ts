@@ -84,6 +84,7 @@ describe('display in the household units', () => {
   it('volumes: cups below 4 cups, quarts above; mL and L in metric', () => {
     expect(formatVolume(NIST.cup * 1.25, 'us')).toBe('1¼ cups')
     expect(formatVolume(NIST.quart * 2.5, 'us')).toBe('2.5 qt')
+    expect(formatVolume(NIST.quart, 'us')).toBe('1.0 qt')
     expect(formatVolume(301, 'metric')).toBe('300 mL')
     expect(formatVolume(2500, 'metric')).toBe('2.50 L')
     expect(mlToCups(NIST.pint)).toBeCloseTo(2, 6)
