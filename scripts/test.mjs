@@ -23,7 +23,9 @@ let skipped = 0
 try {
   const result = JSON.parse(readFileSync(report, 'utf8'))
   passed = result.numPassedTests
-  failed = result.numFailedTests + (result.numFailedTestSuites ?? 0)
+  // A file that fails outside any test (an error in a hook or at import) counts as one failure.
+  const brokenFiles = result.testResults.filter(f => f.status === 'failed' && !f.assertionResults.some(t => t.status === 'failed')).length
+  failed = result.numFailedTests + brokenFiles
   skipped = result.numPendingTests + result.numTodoTests
 }
 catch {

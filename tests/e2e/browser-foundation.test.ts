@@ -2,7 +2,7 @@ import { existsSync } from 'node:fs'
 import type { Browser } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { startServer, type RunningServer } from '../support/server'
-import { launchBrowser, screenshot, signIn } from '../support/browser'
+import { launchBrowser, screenshot, signIn, visible } from '../support/browser'
 
 let server: RunningServer
 let browser: Browser
@@ -31,16 +31,16 @@ describe('first visit in Chromium', () => {
     await page.getByRole('button', { name: 'Create account' }).click()
 
     await page.waitForURL(`${server.url}/`)
-    await expect(page.getByRole('heading', { level: 1, name: 'Pantry board' }).isVisible()).resolves.toBe(true)
-    await expect(page.getByText('Brandvold pantry').first().isVisible()).resolves.toBe(true)
+    expect(await visible(page.getByRole('heading', { level: 1, name: 'Pantry board' }))).toBe(true)
+    expect(await visible(page.getByText('Brandvold pantry').first())).toBe(true)
     expect(existsSync(await screenshot(page, 'foundation-1-pantry-board-new-account'))).toBe(true)
 
     await page.getByRole('button', { name: 'Sign out' }).click()
     await page.waitForURL(/\/login/)
 
     await signIn(page, server.url, 'helper@demo.shelfstead.test')
-    await expect(page.getByText('Quillfeather Hollow Homestead').first().isVisible()).resolves.toBe(true)
-    await expect(page.getByText('Wren Okafor').isVisible()).resolves.toBe(true)
+    expect(await visible(page.getByText('Quillfeather Hollow Homestead').first())).toBe(true)
+    expect(await visible(page.getByText('Wren Okafor'))).toBe(true)
     // a helper may not start a plan: the server would refuse, so the button is not offered
     expect(await page.getByRole('link', { name: 'Plan a canning day' }).count()).toBe(0)
     await screenshot(page, 'foundation-2-pantry-board-helper')

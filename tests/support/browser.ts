@@ -1,6 +1,6 @@
 import { mkdirSync } from 'node:fs'
 import { join } from 'node:path'
-import { chromium, type Browser, type Page } from 'playwright-core'
+import { chromium, type Browser, type Locator, type Page } from 'playwright-core'
 
 export const artifactsDir = join('test-results', 'screenshots')
 
@@ -25,4 +25,15 @@ export async function signIn(page: Page, base: string, email: string, password =
   await page.getByLabel('Password').fill(password)
   await page.getByRole('button', { name: 'Sign in' }).click()
   await page.waitForURL(url => !url.pathname.startsWith('/login'))
+}
+
+/** Wait (up to 10 s) for the locator to be visible; false if it never shows. */
+export async function visible(locator: Locator, timeout = 10_000): Promise<boolean> {
+  try {
+    await locator.waitFor({ state: 'visible', timeout })
+    return true
+  }
+  catch {
+    return false
+  }
 }

@@ -1,0 +1,19 @@
+import { HouseholdPlanParamsSchema } from '../../../../../../utils/schemas/params'
+
+/**
+ * A saved plan, recomputed from current data (prices, canners, altitude may have changed).
+ * If the current data make the model refuse it, the plan still loads with the refusal.
+ */
+export default defineEventHandler(async (event) => {
+  const { id, planId } = await getValidatedRouterParams(event, validateWith(HouseholdPlanParamsSchema))
+  const { db } = await requireHouseholdRole(event, id, 'helper')
+  const plan = await requirePlan(db, id, planId)
+  try {
+    return { plan, result: await computePlan(db, id, plan.request), refusal: null }
+  }
+  catch (error) {
+    const status = (error as { statusCode?: number }).statusCode
+    if (status !== 422) throw error
+    return { plan, result: null, refusal: { message: (error as Error).message, field: (error as { data?: { field?: string } }).data?.field ?? null } }
+  }
+})

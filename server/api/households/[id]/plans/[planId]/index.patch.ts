@@ -1,0 +1,18 @@
+import { eq } from 'drizzle-orm'
+import { HouseholdPlanParamsSchema } from '../../../../../../utils/schemas/params'
+import { PlanUpdateSchema } from '../../../../../../utils/schemas/plan'
+
+/** Rename a plan, change its status, or replace its request (recomputed; a refusal saves nothing). */
+export default defineEventHandler(async (event) => {
+  const { id, planId } = await getValidatedRouterParams(event, validateWith(HouseholdPlanParamsSchema))
+  const body = await readValidatedBody(event, validateWith(PlanUpdateSchema))
+  const { db } = await requireHouseholdRole(event, id, 'canner')
+  const current = await requirePlan(db, id, planId)
+  const request = body.request ?? current.request
+  const result = await computePlan(db, id, request)
+  const [plan] = await db.update(tables.plans)
+    .set({ name: body.name ?? current.name, status: body.status ?? current.status, request, summary: planSummary(result), updatedAt: new Date() })
+    .where(eq(tables.plans.id, current.id))
+    .returning()
+  return { plan, result }
+})

@@ -1,0 +1,100 @@
+import { and, eq } from 'drizzle-orm'
+import { planBatch, PlanningRefusal, type PlanLineRequest, type PlanResult } from '../../utils/planning'
+import type { PlanLineBody, PlanRequestBody } from '../../utils/schemas/plan'
+import { loadCanners, loadCatalogue, loadHouseholdSettings, toPlanningCanner } from './catalogue'
+import type { Database } from './database'
+
+function amountOf(line: PlanLineBody): PlanLineRequest['amount'] {
+  if (line.jars !== undefined) return { mode: 'jars', jars: line.jars }
+  if (line.dryGrams !== undefined) return { mode: 'dryGrams', grams: line.dryGrams }
+  if (line.packages !== undefined) return { mode: 'packages', packages: line.packages }
+  return { mode: 'consumption', jarsPerMonth: line.jarsPerMonth!, months: line.months!, jarsOnShelf: line.jarsOnShelf }
+}
+
+function refuse(message: string, field?: string): never {
+  throw createError({ statusCode: 422, message, data: { field } })
+}
+
+/** Local wall-clock date (YYYY-MM-DD) of the server, for the gauge-test check. */
+function today(): string {
+  const now = new Date()
+  return new Date(now.getTime() - now.getTimezoneOffset() * 60_000).toISOString().slice(0, 10)
+}
+
+/**
+ * Compute a plan for a household from current data. A request the planning model refuses
+ * becomes a 422 whose message says what to change; unknown recipes, jar sizes, ingredients or
+ * canners (including another household's) are refused the same way, naming the field.
+ */
+export async function computePlan(db: Database, householdId: string, body: PlanRequestBody): Promise<PlanResult & { household: { name: string, altitudeFt: number, unitSystem: 'us' | 'metric' } }> {
+  const [{ catalogue, recipes, ingredients }, household, cannerRows] = await Promise.all([
+    loadCatalogue(db, householdId),
+    loadHouseholdSettings(db, householdId),
+    loadCanners(db, householdId),
+  ])
+  const cannerIds = body.cannerIds ?? [body.cannerId!]
+  const canners = cannerIds.map((id, i) => {
+    const row = cannerRows.find(c => c.id === id)
+    if (!row) refuse('That canner is not one of this household\'s canners. Choose one from the list.', body.cannerIds ? `cannerIds.${i}` : 'cannerId')
+    return toPlanningCanner(row)
+  })
+
+  // A line may name the bean for a recipe that takes any variety: plan with that ingredient.
+  const planningRecipes = [...catalogue.recipes]
+  const lines: PlanLineRequest[] = body.lines.map((line, i) => {
+    const recipe = recipes.find(r => r.id === line.recipeId)
+    if (!recipe) refuse('That recipe is not in your Recipe book. Choose one from the list.', `lines.${i}.recipeId`)
+    if (!catalogue.jarSizes.some(j => j.id === line.jarSizeId)) refuse('That jar size is not in the jar catalogue.', `lines.${i}.jarSizeId`)
+    let recipeId = recipe.id
+    if (line.ingredientId && line.ingredientId !== recipe.ingredientId) {
+      const ingredient = ingredients.find(g => g.id === line.ingredientId)
+      if (!ingredient) refuse('That bean is not in the ingredient list.', `lines.${i}.ingredientId`)
+      const base = ingredients.find(g => g.id === recipe.ingredientId)
+      if (ingredient.form !== base?.form) refuse(`${recipe.name} is for ${base?.form ?? 'its own'} beans; ${ingredient.name} cannot be used with it.`, `lines.${i}.ingredientId`)
+      recipeId = `${recipe.id}~${ingredient.id}`
+      if (!planningRecipes.some(r => r.id === recipeId)) {
+        planningRecipes.push({ ...recipe, id: recipeId, name: `${recipe.name} — ${ingredient.name}`, ingredientId: ingredient.id })
+      }
+    }
+    return {
+      recipeId,
+      jarSizeId: line.jarSizeId,
+      amount: amountOf(line),
+      ...(line.saltTsp !== undefined ? { saltTsp: line.saltTsp } : {}),
+      ...(line.dryMlPerJar !== undefined ? { dryMlPerJar: line.dryMlPerJar } : {}),
+    }
+  })
+
+  try {
+    const result = planBatch(
+      { lines, canners, startAt: body.startAt, altitudeFt: body.altitudeFt ?? household.altitudeFt, today: today() },
+      { ...catalogue, recipes: planningRecipes },
+      household,
+    )
+    // Report the recipe ids the household knows, not the per-bean variants made above.
+    const baseId = (id: string) => id.split('~')[0]!
+    for (const line of result.lines) line.recipeId = baseId(line.recipeId)
+    for (const load of result.loads) load.recipeIds = [...new Set(load.recipeIds.map(baseId))]
+    return { ...result, household: { name: household.name, altitudeFt: household.altitudeFt, unitSystem: household.unitSystem } }
+  }
+  catch (error) {
+    if (error instanceof PlanningRefusal) refuse(error.message, error.field)
+    throw error
+  }
+}
+
+/** A saved plan of this household, or a 404 that reveals nothing about other households. */
+export async function requirePlan(db: Database, householdId: string, planId: string) {
+  const [plan] = await db.select().from(tables.plans)
+    .where(and(eq(tables.plans.id, planId), eq(tables.plans.householdId, householdId)))
+  if (!plan) throw createError({ statusCode: 404, message: 'No such plan in this household.' })
+  return plan
+}
+
+export function planSummary(result: PlanResult) {
+  return {
+    jars: result.totals.jars,
+    loads: result.totals.loads,
+    recipes: [...new Set(result.lines.map(l => l.recipeName))],
+  }
+}
