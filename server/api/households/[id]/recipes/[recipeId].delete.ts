@@ -1,0 +1,13 @@
+import { and, eq } from 'drizzle-orm'
+import { HouseRecipeParamsSchema } from '../../../../../utils/schemas/catalogue'
+
+/** Remove a house recipe of this household (its jar specs and bands go with it). */
+export default defineEventHandler(async (event) => {
+  const { id, recipeId } = await getValidatedRouterParams(event, validateWith(HouseRecipeParamsSchema))
+  const { db } = await requireHouseholdRole(event, id, 'canner')
+  const [deleted] = await db.delete(tables.recipes)
+    .where(and(eq(tables.recipes.id, recipeId), eq(tables.recipes.householdId, id)))
+    .returning({ id: tables.recipes.id })
+  if (!deleted) throw createError({ statusCode: 404, message: 'No such house recipe in this household.' })
+  return { id: deleted.id, deleted: true }
+})

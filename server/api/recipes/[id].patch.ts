@@ -1,0 +1,19 @@
+import { and, eq, isNull } from 'drizzle-orm'
+import { RecipeParamsSchema, SharedRecipePatchSchema } from '../../../utils/schemas/catalogue'
+
+/**
+ * A site admin corrects a shared recipe's words and source. Process times and pressures are
+ * not editable here: they come from the published tables in the reference seed.
+ */
+export default defineEventHandler(async (event) => {
+  const { id } = await getValidatedRouterParams(event, validateWith(RecipeParamsSchema))
+  const body = await readValidatedBody(event, validateWith(SharedRecipePatchSchema))
+  await requireAdmin(event)
+  const db = await useDB()
+  const [recipe] = await db.update(tables.recipes)
+    .set({ ...body, updatedAt: new Date() })
+    .where(and(eq(tables.recipes.id, id), isNull(tables.recipes.householdId)))
+    .returning()
+  if (!recipe) throw createError({ statusCode: 404, message: 'No such shared recipe.' })
+  return recipe
+})

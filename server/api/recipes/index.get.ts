@@ -1,0 +1,13 @@
+import { HouseholdQuerySchema } from '../../../utils/schemas/catalogue'
+
+/** The Recipe book: shared recipes (tested ones first) and the household's house recipes. */
+export default defineEventHandler(async (event) => {
+  const { householdId } = await getValidatedQuery(event, validateWith(HouseholdQuerySchema))
+  const { db } = await requireHouseholdRole(event, householdId, 'helper')
+  const { recipes, ingredients } = await loadCatalogue(db, householdId)
+  return recipes.map(recipe => ({
+    ...recipe,
+    ingredient: ingredients.find(i => i.id === recipe.ingredientId) ?? null,
+    basedOn: recipes.find(r => r.id === recipe.basedOnRecipeId)?.name ?? null,
+  }))
+})
