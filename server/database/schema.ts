@@ -253,3 +253,202 @@ export const plansRelations = relations(plans, ({ one, many }) => ({
 }))
 
 export type PlanRow = typeof plans.$inferSelect
+
+// ---------------------------------------------------------------------------
+// After the plan: the Logbook, seal checks, the Shelf, photos and mail
+
+export const loadStatuses = ['done', 'pending'] as const
+export const unsealedActions = ['refrigerate', 'reprocess'] as const
+export type UnsealedAction = (typeof unsealedActions)[number]
+
+/** What a logged load fell short of: the pressure and minutes it needed, and what to do. */
+export interface LoadShortfall {
+  kind: 'under-processed' | 'no-published-process'
+  message: string
+}
+
+/**
+ * One canner load as it was run. A load marked for reprocessing at a seal check starts as
+ * 'pending' (no times yet) with a deadline 24 h after the original load came out.
+ */
+export const canningLoads = pgTable('canning_loads', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  /** Household sequence, shown as the load code "L-007" on labels. */
+  number: integer('number').notNull(),
+  status: text('status', { enum: loadStatuses }).notNull().default('done'),
+  planId: uuid('plan_id').references(() => plans.id, { onDelete: 'set null' }),
+  planLoadIndex: integer('plan_load_index'),
+  reprocessOfId: uuid('reprocess_of_id').references((): AnyPgColumn => canningLoads.id, { onDelete: 'set null' }),
+  cannerId: uuid('canner_id').references(() => canners.id, { onDelete: 'set null' }),
+  /** The canner's name and gauge when logged, so the log reads right after a canner is removed. */
+  cannerName: text('canner_name').notNull(),
+  gaugeType: text('gauge_type', { enum: gaugeTypes }).notNull(),
+  altitudeFt: integer('altitude_ft').notNull(),
+  pressurePsi: doublePrecision('pressure_psi'),
+  processMinutes: integer('process_minutes'),
+  /** What the published table (or the plan) asks for this load; null when nothing covers it. */
+  requiredPsi: doublePrecision('required_psi'),
+  requiredMinutes: integer('required_minutes'),
+  requiredSource: text('required_source'),
+  startedAt: timestamp('started_at', { withTimezone: true }),
+  endedAt: timestamp('ended_at', { withTimezone: true }),
+  /** A pending reprocessing load must start before this. */
+  deadlineAt: timestamp('deadline_at', { withTimezone: true }),
+  shortfall: jsonb('shortfall').$type<LoadShortfall | null>(),
+  notes: text('notes').notNull().default(''),
+  createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+  ...timestamps,
+}, t => [
+  uniqueIndex('canning_loads_number_unique').on(t.householdId, t.number),
+  index('canning_loads_household_started_idx').on(t.householdId, t.startedAt),
+  index('canning_loads_plan_idx').on(t.planId),
+])
+
+/** A recipe in one jar size within a load; the seal check's counts are kept per line. */
+export const loadLines = pgTable('load_lines', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  loadId: uuid('load_id').notNull().references(() => canningLoads.id, { onDelete: 'cascade' }),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  lineIndex: integer('line_index').notNull(),
+  recipeId: text('recipe_id').references(() => recipes.id, { onDelete: 'set null' }),
+  /** The product name as logged (the recipe's name, or a bean variety chosen for it). */
+  product: text('product').notNull(),
+  jarSizeId: text('jar_size_id').notNull().references(() => jarSizes.id),
+  jars: integer('jars').notNull(),
+  sealed: integer('sealed'),
+  unsealed: integer('unsealed'),
+  unsealedAction: text('unsealed_action', { enum: unsealedActions }),
+}, t => [
+  index('load_lines_load_idx').on(t.loadId),
+  index('load_lines_household_recipe_idx').on(t.householdId, t.recipeId),
+])
+
+export const sealChecks = pgTable('seal_checks', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  loadId: uuid('load_id').notNull().references(() => canningLoads.id, { onDelete: 'cascade' }),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  checkedAt: timestamp('checked_at', { withTimezone: true }).notNull(),
+  checkedBy: uuid('checked_by').references(() => users.id, { onDelete: 'set null' }),
+  notes: text('notes').notNull().default(''),
+  ...timestamps,
+}, t => [
+  uniqueIndex('seal_checks_load_unique').on(t.loadId),
+  index('seal_checks_household_idx').on(t.householdId),
+])
+
+/** A lot of sealed jars on the Shelf: one load line's sealed jars, or a row of an imported inventory. */
+export const shelfLots = pgTable('shelf_lots', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  loadId: uuid('load_id').references(() => canningLoads.id, { onDelete: 'set null' }),
+  loadLineId: uuid('load_line_id').references(() => loadLines.id, { onDelete: 'set null' }),
+  recipeId: text('recipe_id').references(() => recipes.id, { onDelete: 'set null' }),
+  product: text('product').notNull(),
+  jarSizeId: text('jar_size_id').notNull().references(() => jarSizes.id),
+  loadCode: text('load_code').notNull().default(''),
+  cannedOn: date('canned_on').notNull(),
+  bestBy: date('best_by').notNull(),
+  jarsIn: integer('jars_in').notNull(),
+  jarsLeft: integer('jars_left').notNull(),
+  source: text('source', { enum: ['seal-check', 'import'] }).notNull(),
+  /** When the jars reached the Shelf (for the stock-over-time chart). */
+  shelvedAt: timestamp('shelved_at', { withTimezone: true }).notNull(),
+  ...timestamps,
+}, t => [index('shelf_lots_household_fifo_idx').on(t.householdId, t.cannedOn)])
+
+/**
+ * The Shelf's movement ledger: each take-off is a row; the rows of one take-off share a batch,
+ * and undo marks the household's latest batch undone and puts its jars back.
+ */
+export const shelfMovements = pgTable('shelf_movements', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  batchId: uuid('batch_id').notNull(),
+  lotId: uuid('lot_id').notNull().references(() => shelfLots.id, { onDelete: 'cascade' }),
+  jars: integer('jars').notNull(),
+  /** Empty jars returned to the household's jar stock by this take-off. */
+  jarsReturned: integer('jars_returned').notNull().default(0),
+  movedAt: timestamp('moved_at', { withTimezone: true }).notNull(),
+  movedBy: uuid('moved_by').references(() => users.id, { onDelete: 'set null' }),
+  undoneAt: timestamp('undone_at', { withTimezone: true }),
+}, t => [
+  index('shelf_movements_household_idx').on(t.householdId, t.movedAt),
+  index('shelf_movements_batch_idx').on(t.batchId),
+])
+
+/** Unsealed jars sent to the refrigerator: eat within several days (USDA CG). */
+export const fridgeItems = pgTable('fridge_items', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  loadId: uuid('load_id').notNull().references(() => canningLoads.id, { onDelete: 'cascade' }),
+  loadLineId: uuid('load_line_id').notNull().references(() => loadLines.id, { onDelete: 'cascade' }),
+  product: text('product').notNull(),
+  jarSizeId: text('jar_size_id').notNull().references(() => jarSizes.id),
+  jars: integer('jars').notNull(),
+  refrigeratedAt: timestamp('refrigerated_at', { withTimezone: true }).notNull(),
+  clearedAt: timestamp('cleared_at', { withTimezone: true }),
+}, t => [index('fridge_items_household_idx').on(t.householdId)])
+
+export const loadPhotos = pgTable('load_photos', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  loadId: uuid('load_id').notNull().references(() => canningLoads.id, { onDelete: 'cascade' }),
+  storageKey: text('storage_key').notNull(),
+  contentType: text('content_type', { enum: ['image/jpeg', 'image/png', 'image/webp'] }).notNull(),
+  bytes: integer('bytes').notNull(),
+  originalName: text('original_name').notNull().default(''),
+  uploadedBy: uuid('uploaded_by').references(() => users.id, { onDelete: 'set null' }),
+  ...timestamps,
+}, t => [index('load_photos_load_idx').on(t.loadId)])
+
+/**
+ * Mail that falls due later (a seal-check reminder). The sender claims a row by setting
+ * sent_at with a conditional update, so two ticks or a restart never send it twice.
+ */
+export const reminders = pgTable('reminders', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  kind: text('kind', { enum: ['seal-check'] }).notNull(),
+  loadId: uuid('load_id').notNull().references(() => canningLoads.id, { onDelete: 'cascade' }),
+  dueAt: timestamp('due_at', { withTimezone: true }).notNull(),
+  sentAt: timestamp('sent_at', { withTimezone: true }),
+  cancelledAt: timestamp('cancelled_at', { withTimezone: true }),
+  recipients: jsonb('recipients').$type<string[]>(),
+  attempts: integer('attempts').notNull().default(0),
+  lastError: text('last_error'),
+  ...timestamps,
+}, t => [
+  uniqueIndex('reminders_kind_load_unique').on(t.kind, t.loadId),
+  index('reminders_due_idx').on(t.dueAt),
+])
+
+/** Messages received by the local fake SMTP server (development, demo and tests only). */
+export const mailOutbox = pgTable('mail_outbox', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  receivedAt: timestamp('received_at', { withTimezone: true }).notNull().defaultNow(),
+  envelopeFrom: text('envelope_from').notNull().default(''),
+  envelopeTo: jsonb('envelope_to').$type<string[]>().notNull(),
+  subject: text('subject').notNull().default(''),
+  text: text('text').notNull().default(''),
+  html: text('html'),
+  raw: text('raw').notNull(),
+}, t => [index('mail_outbox_received_idx').on(t.receivedAt)])
+
+export const canningLoadsRelations = relations(canningLoads, ({ one, many }) => ({
+  household: one(households, { fields: [canningLoads.householdId], references: [households.id] }),
+  lines: many(loadLines),
+  photos: many(loadPhotos),
+}))
+export const loadLinesRelations = relations(loadLines, ({ one }) => ({
+  load: one(canningLoads, { fields: [loadLines.loadId], references: [canningLoads.id] }),
+}))
+export const loadPhotosRelations = relations(loadPhotos, ({ one }) => ({
+  load: one(canningLoads, { fields: [loadPhotos.loadId], references: [canningLoads.id] }),
+}))
+
+export type CanningLoadRow = typeof canningLoads.$inferSelect
+export type LoadLineRow = typeof loadLines.$inferSelect
+export type ShelfLotRow = typeof shelfLots.$inferSelect
+export type ShelfMovementRow = typeof shelfMovements.$inferSelect
+export type ReminderRow = typeof reminders.$inferSelect
