@@ -7,6 +7,8 @@ export default defineNuxtConfig({
   srcDir: '.',
   dir: { app: 'app' },
   serverDir: 'server',
+  // Separate build and output folders let several builds run side by side (tests, benchmarks).
+  ...(process.env.SHELFSTEAD_BUILD_DIR ? { buildDir: process.env.SHELFSTEAD_BUILD_DIR } : {}),
   telemetry: false,
   devtools: { enabled: false },
   modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils'],
@@ -26,6 +28,9 @@ export default defineNuxtConfig({
       ],
       link: [{ rel: 'icon', type: 'image/svg+xml', href: '/favicon.svg' }],
     },
+  },
+  nitro: {
+    output: { dir: process.env.SHELFSTEAD_OUTPUT_DIR || '.output' },
   },
   runtimeConfig: {
     dataDir: '',

@@ -4,7 +4,7 @@ import { createServer } from 'node:net'
 import { tmpdir } from 'node:os'
 import { join, resolve } from 'node:path'
 
-export const serverEntry = resolve('.output/server/index.mjs')
+export const serverEntry = resolve(process.env.SHELFSTEAD_OUTPUT_DIR || '.output', 'server/index.mjs')
 
 export interface RunningServer {
   url: string
