@@ -102,7 +102,10 @@ export function planLine(line: PlanLineRequest, i: number, ctx: LineContext): Pl
   const display = {
     dry: formatDry(fill.dryMl, fill.dryGrams, system),
     salt: formatSalt(fill.saltTsp, system),
-    water: formatVolume(fill.waterMl, system),
+    // A published hot pack is topped with its own cooking liquid; only a dry pack needs kettle water.
+    water: recipe.fillBasis === 'published'
+      ? `hot cooking liquid to ${formatLength(recipe.headspaceMm, system)} headspace`
+      : formatVolume(fill.waterMl, system),
     headspace: formatLength(recipe.headspaceMm, system),
     dryCups: kitchenMeasure(mlToCups(fill.dryMl), 'cup'),
     saltSpoons: fill.saltTsp > 0 ? kitchenMeasure(fill.saltTsp, 'tsp') : null,

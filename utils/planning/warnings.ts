@@ -34,8 +34,9 @@ export function standingWarnings({ recipes, canners, loads, jarSizes, feet, toda
   }
   for (const r of recipes) {
     if (r.status === 'house') {
-      const extra = r.caution ? ` ${r.caution}` : ''
-      out.push(caution('house-recipe-untested', `${r.name} is a house recipe: untested — your own risk.${extra}`))
+      // The stored caution usually opens with the same words; say them once.
+      const extra = r.caution ? ` ${r.caution.replace(/^untested\s*[—-]\s*your own risk\.?\s*/i, '')}` : ''
+      out.push(caution('house-recipe-untested', `${r.name} is a house recipe: untested — your own risk.${extra.trimEnd()}`))
     } else if (r.caution) {
       out.push(caution('recipe-caution', `${r.name}: ${r.caution}`))
     }
