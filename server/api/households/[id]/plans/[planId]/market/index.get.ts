@@ -1,0 +1,13 @@
+import { and, eq } from 'drizzle-orm'
+import { HouseholdPlanParamsSchema } from '../../../../../../../utils/schemas/params'
+
+/** Who checked off what on this plan's market list. */
+export default defineEventHandler(async (event) => {
+  const { id, planId } = await getValidatedRouterParams(event, validateWith(HouseholdPlanParamsSchema))
+  const { db } = await requireHouseholdRole(event, id, 'helper')
+  await requirePlan(db, id, planId)
+  return db.select({ itemKey: tables.marketChecks.itemKey, checkedAt: tables.marketChecks.checkedAt, checkedBy: tables.users.name })
+    .from(tables.marketChecks)
+    .leftJoin(tables.users, eq(tables.users.id, tables.marketChecks.checkedBy))
+    .where(and(eq(tables.marketChecks.planId, planId), eq(tables.marketChecks.householdId, id)))
+})

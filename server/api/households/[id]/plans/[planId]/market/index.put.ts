@@ -1,0 +1,21 @@
+import { and, eq } from 'drizzle-orm'
+import { MarketCheckSchema } from '../../../../../../../utils/schemas/market'
+import { HouseholdPlanParamsSchema } from '../../../../../../../utils/schemas/params'
+
+/** Check an item off (or back on) for every member. Any member may do it, helpers included. */
+export default defineEventHandler(async (event) => {
+  const { id, planId } = await getValidatedRouterParams(event, validateWith(HouseholdPlanParamsSchema))
+  const body = await readValidatedBody(event, validateWith(MarketCheckSchema))
+  const { db, user } = await requireHouseholdRole(event, id, 'helper')
+  await requirePlan(db, id, planId)
+  if (body.checked) {
+    await db.insert(tables.marketChecks)
+      .values({ planId, householdId: id, itemKey: body.itemKey, checkedBy: user.id })
+      .onConflictDoNothing()
+  }
+  else {
+    await db.delete(tables.marketChecks)
+      .where(and(eq(tables.marketChecks.planId, planId), eq(tables.marketChecks.itemKey, body.itemKey)))
+  }
+  return { itemKey: body.itemKey, checked: body.checked }
+})
