@@ -1,0 +1,98 @@
+/** Schemas of the Logbook and the seal check, shared by the API routes and the forms. */
+import { z } from 'zod'
+
+const uuid = (what: string) => z.string({ required_error: `Choose the ${what}.`, invalid_type_error: `Choose the ${what}.` }).uuid(`That ${what} id is not valid.`)
+const ISO_DATE_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:\d{2})$/
+const instant = (what: string) => z.string({ required_error: `Enter when the load ${what}.`, invalid_type_error: `Enter when the load ${what}.` })
+  .regex(ISO_DATE_TIME, `Enter when the load ${what} as a date and time.`)
+  .refine(s => !Number.isNaN(Date.parse(s)), 'That date does not exist.')
+const wholeNumber = (message: string) => z.number({ required_error: message, invalid_type_error: message }).int(message)
+
+export const HouseholdLoadParamsSchema = z.object({ id: uuid('household'), loadId: uuid('load') })
+export const HouseholdPhotoParamsSchema = z.object({ id: uuid('household'), photoId: uuid('photo') })
+
+export const LoadLineSchema = z.object({
+  recipeId: z.string({ required_error: 'Choose the recipe.' }).min(1, 'Choose the recipe.').max(120),
+  jarSizeId: z.string({ required_error: 'Choose the jar size.' }).min(1, 'Choose the jar size.').max(60),
+  jars: wholeNumber('Enter the number of jars.').min(1, 'A line holds at least 1 jar.').max(60, 'No home canner holds more than 60 jars in one load.'),
+  /** The product as it should read on the Shelf; defaults to the recipe's name. */
+  product: z.string().trim().max(120, 'Keep the product name under 120 characters.').optional(),
+})
+
+/** The pressure held and the minutes timed at that pressure, as the canner used them. */
+const processFields = {
+  pressurePsi: z.number({ required_error: 'Enter the pressure you held.', invalid_type_error: 'Enter the pressure you held.' })
+    .positive('Enter the gauge pressure you held, in psi.').max(20, 'Home pressure canners do not run above 20 psi; check the gauge reading.'),
+  processMinutes: wholeNumber('Enter the minutes timed at pressure.').min(1, 'Enter the minutes timed at pressure.').max(300, 'More than 300 minutes looks like a typing slip.'),
+}
+
+const NOTES = z.string().trim().max(2000, 'Keep the notes under 2,000 characters.')
+const MAX_LOAD_MS = 24 * 3_600_000
+
+function checkTimes(body: { startedAt?: string, endedAt?: string }, ctx: z.RefinementCtx) {
+  if (!body.startedAt || !body.endedAt) return
+  const span = Date.parse(body.endedAt) - Date.parse(body.startedAt)
+  if (span <= 0) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['endedAt'], message: 'The load must come out after it went in: check the end time.' })
+  else if (span > MAX_LOAD_MS) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['endedAt'], message: 'One load does not take more than 24 hours: check the start and end.' })
+}
+
+export const LoadCreateSchema = z.object({
+  planId: uuid('plan').optional(),
+  planLoad: wholeNumber('Give the load number of the plan.').min(1).max(200).optional(),
+  cannerId: uuid('canner'),
+  lines: z.array(LoadLineSchema).min(1, 'Add at least one recipe and jar size.').max(8, 'At most 8 lines in one load.'),
+  ...processFields,
+  startedAt: instant('started'),
+  endedAt: instant('came out'),
+  notes: NOTES.default(''),
+}).superRefine((body, ctx) => {
+  if ((body.planId === undefined) !== (body.planLoad === undefined)) {
+    ctx.addIssue({ code: z.ZodIssueCode.custom, path: [body.planId ? 'planLoad' : 'planId'], message: 'Give both the plan and its load number, or neither.' })
+  }
+  checkTimes(body, ctx)
+})
+export type LoadCreateInput = z.infer<typeof LoadCreateSchema>
+
+/** Record how a pending (reprocessing) load was run, or change a load's notes. */
+export const LoadUpdateSchema = z.object({
+  ...processFields,
+  startedAt: instant('started'),
+  endedAt: instant('came out'),
+  notes: NOTES,
+}).partial().superRefine((body, ctx) => {
+  if (Object.keys(body).length === 0) ctx.addIssue({ code: z.ZodIssueCode.custom, path: [], message: 'Send the run (pressure, minutes, start and end) or the notes.' })
+  checkTimes(body, ctx)
+})
+export type LoadUpdateInput = z.infer<typeof LoadUpdateSchema>
+
+export const loadSortKeys = ['startedAt', 'code', 'canner', 'jars', 'pressurePsi', 'processMinutes'] as const
+export type LoadSortKey = (typeof loadSortKeys)[number]
+const SORT = new RegExp(`^-?(${loadSortKeys.join('|')})$`)
+const dateOnly = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Give the date as YYYY-MM-DD.').refine(s => !Number.isNaN(Date.parse(s)), 'That date does not exist.')
+
+export const LoadListQuerySchema = z.object({
+  page: z.coerce.number({ invalid_type_error: 'page must be a number.' }).int('page must be a whole number.').min(1, 'page starts at 1.').max(10_000).default(1),
+  pageSize: z.coerce.number({ invalid_type_error: 'pageSize must be a number.' }).int().min(1, 'pageSize must be between 1 and 100.').max(100, 'pageSize must be between 1 and 100.').default(20),
+  sort: z.string().regex(SORT, `Sort by one of ${loadSortKeys.join(', ')}, with a leading "-" for newest or largest first.`).default('-startedAt'),
+  recipeId: z.string().min(1).max(120).optional(),
+  cannerId: z.string().uuid('That canner id is not valid.').optional(),
+  from: dateOnly.optional(),
+  to: dateOnly.optional(),
+}).refine(q => !q.from || !q.to || q.from <= q.to, { path: ['to'], message: 'The end of the date range comes before its start.' })
+export type LoadListQuery = z.infer<typeof LoadListQuerySchema>
+
+export const SealCheckLineSchema = z.object({
+  loadLineId: uuid('load line'),
+  sealed: wholeNumber('Enter how many jars sealed.').min(0, 'Sealed jars cannot be fewer than 0.').max(60),
+  unsealed: wholeNumber('Enter how many jars did not seal.').min(0, 'Unsealed jars cannot be fewer than 0.').max(60),
+  action: z.enum(['refrigerate', 'reprocess'], { errorMap: () => ({ message: 'Choose what to do with the jars that cannot go on the shelf: refrigerate or reprocess.' }) }).optional(),
+})
+
+export const SealCheckSchema = z.object({
+  loadId: uuid('load'),
+  lines: z.array(SealCheckLineSchema).min(1, 'Record every line of the load.').max(8),
+  notes: NOTES.default(''),
+})
+export type SealCheckInput = z.infer<typeof SealCheckSchema>
+
+export const SendMarketListSchema = z.object({ userId: uuid('member') })
