@@ -1,0 +1,19 @@
+import { HouseholdLoadParamsSchema } from '../../../../../../utils/schemas/logbook'
+
+/**
+ * Attach a photo to a load (canner and up): multipart field "photo", JPEG, PNG or WebP by its
+ * content (magic bytes), at most 8 MB.
+ */
+export default defineEventHandler(async (event) => {
+  const { id, loadId } = await getValidatedRouterParams(event, validateWith(HouseholdLoadParamsSchema))
+  const { db, user } = await requireHouseholdRole(event, id, 'canner')
+  const declared = Number(getRequestHeader(event, 'content-length') ?? 0)
+  if (declared > MAX_PHOTO_BYTES + 64 * 1024) throw createError({ statusCode: 413, message: 'That photo is larger than 8 MB. Send a smaller one (phones can share a reduced size).' })
+  await requireLoad(db, id, loadId)
+  const parts = await readMultipartFormData(event)
+  const file = parts?.find(p => p.name === 'photo' && p.filename !== undefined)
+  if (!file) throw createError({ statusCode: 400, message: 'photo: Choose a photo to upload.', data: { issues: [{ field: 'photo', message: 'Choose a photo to upload.' }] } })
+  const photo = await savePhoto(db, { householdId: id, loadId, userId: user.id, bytes: file.data, name: file.filename ?? '' })
+  setResponseStatus(event, 201)
+  return photo
+})

@@ -1,0 +1,42 @@
+import { mailMode, parseMessage, startFakeSmtp, stopFakeSmtp } from '../utils/mail'
+import { useDB } from '../utils/database'
+import { sendDueReminders } from '../utils/reminders'
+
+/**
+ * Mail at start-up: the local fake SMTP server when mail is in `fake` mode (development, demo,
+ * tests), and the reminder sender, which looks for due seal-check reminders every
+ * SHELFSTEAD_REMINDER_INTERVAL_MS (60 s by default) and once as soon as the database is ready,
+ * so reminders that fell due while the server was down go out after a restart.
+ */
+export default defineNitroPlugin((nitroApp) => {
+  const mode = mailMode()
+  if (mode === 'fake') {
+    startFakeSmtp(async ({ from, to, raw }) => {
+      const db = await useDB()
+      const parsed = await parseMessage(raw)
+      await db.insert(tables.mailOutbox).values({ envelopeFrom: from, envelopeTo: to, raw, ...parsed })
+    }).then(
+      port => console.info(`[shelfstead] Mail goes to the local fake SMTP server on 127.0.0.1:${port}; read it at /dev/outbox.`),
+      error => console.error('[shelfstead] The local mail fake could not start:', error),
+    )
+  }
+  else if (mode === 'off') {
+    console.info('[shelfstead] E-mail is off (no SMTP_URL or SMTP_HOST): reminders wait in the database until it is set up.')
+  }
+
+  const interval = Math.max(200, Number(process.env.SHELFSTEAD_REMINDER_INTERVAL_MS || 60_000))
+  let timer: ReturnType<typeof setInterval> | undefined
+  const tick = () => useDB().then(db => sendDueReminders(db)).catch(error => console.error('[shelfstead] Reminder tick failed:', error))
+  if (mode !== 'off') {
+    useDB().then(() => {
+      tick()
+      timer = setInterval(tick, interval)
+      timer.unref?.()
+    }, () => {})
+  }
+
+  nitroApp.hooks.hook('close', async () => {
+    if (timer) clearInterval(timer)
+    await stopFakeSmtp()
+  })
+})

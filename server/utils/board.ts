@@ -1,0 +1,48 @@
+import { and, desc, eq, inArray, isNull } from 'drizzle-orm'
+import { jarsPerMonthByProduct, stockSeries, usedPerMonth } from '../../utils/after'
+import type { Database } from './database'
+import { loadsAwaitingCheck } from './logbook'
+import { sealRates } from './sealCheck'
+import { listShelf } from './shelf'
+
+/**
+ * Everything the Pantry board shows, in one answer: the Shelf by product, seal checks due,
+ * plans in progress, jars near or past best-by, seal rates, stock over the last 12 months,
+ * jars used per month, and the jars-per-month figure the Batch planner can use.
+ */
+export async function pantryBoard(db: Database, householdId: string) {
+  const now = serverNow()
+  const [shelf, checks, rates, plans, lots, moves] = await Promise.all([
+    listShelf(db, householdId),
+    loadsAwaitingCheck(db, householdId),
+    sealRates(db, householdId),
+    db.select({ id: tables.plans.id, name: tables.plans.name, status: tables.plans.status, summary: tables.plans.summary, updatedAt: tables.plans.updatedAt })
+      .from(tables.plans)
+      .where(and(eq(tables.plans.householdId, householdId), inArray(tables.plans.status, ['planned', 'in-progress'])))
+      .orderBy(desc(tables.plans.updatedAt)),
+    db.select({ shelvedAt: tables.shelfLots.shelvedAt, jarsIn: tables.shelfLots.jarsIn })
+      .from(tables.shelfLots).where(eq(tables.shelfLots.householdId, householdId)),
+    db.select({
+      movedAt: tables.shelfMovements.movedAt, jars: tables.shelfMovements.jars,
+      product: tables.shelfLots.product, recipeId: tables.shelfLots.recipeId, jarSizeId: tables.shelfLots.jarSizeId,
+    })
+      .from(tables.shelfMovements).innerJoin(tables.shelfLots, eq(tables.shelfLots.id, tables.shelfMovements.lotId))
+      .where(and(eq(tables.shelfMovements.householdId, householdId), isNull(tables.shelfMovements.undoneAt))),
+  ])
+  const taken = moves.map(m => ({ at: m.movedAt, jars: m.jars, key: `${m.product}|${m.jarSizeId}`, product: m.product, recipeId: m.recipeId, jarSizeId: m.jarSizeId }))
+  return {
+    now,
+    today: shelf.today,
+    shelf: { totalJars: shelf.totalJars, byProduct: shelf.byProduct },
+    sealChecksDue: checks.due,
+    reprocessing: checks.reprocessing,
+    plansInProgress: plans,
+    pastBestBy: shelf.lots.filter(l => l.bestByStatus === 'past'),
+    nearBestBy: shelf.lots.filter(l => l.bestByStatus === 'near'),
+    fridge: shelf.fridge,
+    sealRates: rates,
+    stockOverTime: stockSeries(lots.map(l => ({ at: l.shelvedAt, jars: l.jarsIn })), taken, now),
+    usedPerMonth: usedPerMonth(taken, now),
+    jarsUsedPerMonth: jarsPerMonthByProduct(taken, now),
+  }
+}

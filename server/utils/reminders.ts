@@ -1,0 +1,90 @@
+import { and, eq, inArray, isNull, lte, sql } from 'drizzle-orm'
+import { loadCode, sealWindow } from '../../utils/after'
+import type { Database } from './database'
+
+const when = (d: Date) => d.toLocaleString('en-US', { weekday: 'long', month: 'long', day: 'numeric', hour: 'numeric', minute: '2-digit', timeZoneName: 'short' })
+
+/** Who hears about a seal check: the household's canners and owners. */
+async function recipientsOf(db: Database, householdId: string): Promise<string[]> {
+  const rows = await db.select({ email: tables.users.email }).from(tables.memberships)
+    .innerJoin(tables.users, eq(tables.users.id, tables.memberships.userId))
+    .where(and(eq(tables.memberships.householdId, householdId), inArray(tables.memberships.role, ['canner', 'owner'])))
+  return [...new Set(rows.map(r => r.email))]
+}
+
+export async function sealReminderMessage(db: Database, loadId: string) {
+  const [load] = await db.select().from(tables.canningLoads).where(eq(tables.canningLoads.id, loadId))
+  if (!load?.endedAt) return null
+  const lines = await db.select().from(tables.loadLines).where(eq(tables.loadLines.loadId, loadId))
+  const window = sealWindow(load.endedAt, load.endedAt)
+  const code = loadCode(load.number)
+  const jars = lines.map(l => `${l.jars} × ${l.product} (${l.jarSizeId.replace(/-/g, ' ')})`)
+  const link = `${publicUrl()}/logbook/${load.id}`
+  const text = [
+    `Load ${code} came out of ${load.cannerName} on ${when(load.endedAt)}:`,
+    ...jars.map(j => `  - ${j}`),
+    '',
+    `Its seal check is due now. Test the seals 12–24 hours after a load comes out: between ${when(window.dueAt)} and ${when(window.byAt)}.`,
+    'Remove the bands and press the middle of each lid; a lid that springs back has not sealed (USDA Complete Guide to Home Canning, "Testing jar seals").',
+    '',
+    `Unsealed jars: reprocess within 24 hours of unloading (by ${when(window.reprocessBy)}) with a new lid and the same process time, or refrigerate them and eat within several days.`,
+    '',
+    `Record the seal check: ${link}`,
+  ].join('\n')
+  const html = `<p>Load <strong>${escapeHtml(code)}</strong> came out of ${escapeHtml(load.cannerName)} on ${escapeHtml(when(load.endedAt))}:</p>`
+    + `<ul>${jars.map(j => `<li>${escapeHtml(j)}</li>`).join('')}</ul>`
+    + `<p>Its seal check is due now. Test the seals 12–24 hours after a load comes out: between ${escapeHtml(when(window.dueAt))} and ${escapeHtml(when(window.byAt))}. Remove the bands and press the middle of each lid; a lid that springs back has not sealed (USDA Complete Guide to Home Canning, “Testing jar seals”).</p>`
+    + `<p>Unsealed jars: reprocess within 24 hours of unloading (by ${escapeHtml(when(window.reprocessBy))}) with a new lid and the same process time, or refrigerate them and eat within several days.</p>`
+    + `<p><a href="${escapeHtml(link)}">Record the seal check</a></p>`
+  return { subject: `Seal check due: load ${code} (${lines.reduce((s, l) => s + l.jars, 0)} jars)`, text, html, householdId: load.householdId }
+}
+
+let running = false
+
+/**
+ * Send every reminder that is due. Each row is claimed first with a conditional update
+ * (sent_at set only where it is still null), so two ticks, or a server restarted mid-way,
+ * never send one twice; a failed send gives the claim back to be tried on a later tick.
+ */
+export async function sendDueReminders(db: Database): Promise<number> {
+  if (running) return 0
+  running = true
+  try {
+    const now = serverNow()
+    const due = await db.select({ id: tables.reminders.id, loadId: tables.reminders.loadId })
+      .from(tables.reminders)
+      .where(and(isNull(tables.reminders.sentAt), isNull(tables.reminders.cancelledAt), lte(tables.reminders.dueAt, now), sql`${tables.reminders.attempts} < 10`))
+    let sent = 0
+    for (const reminder of due) {
+      const [checked] = await db.select({ id: tables.sealChecks.id }).from(tables.sealChecks).where(eq(tables.sealChecks.loadId, reminder.loadId))
+      if (checked) {
+        await db.update(tables.reminders).set({ cancelledAt: now }).where(eq(tables.reminders.id, reminder.id))
+        continue
+      }
+      const [claimed] = await db.update(tables.reminders)
+        .set({ sentAt: now, attempts: sql`${tables.reminders.attempts} + 1`, updatedAt: now })
+        .where(and(eq(tables.reminders.id, reminder.id), isNull(tables.reminders.sentAt)))
+        .returning()
+      if (!claimed) continue
+      try {
+        const message = await sealReminderMessage(db, reminder.loadId)
+        const to = message ? await recipientsOf(db, message.householdId) : []
+        if (!message || !to.length) {
+          await db.update(tables.reminders).set({ cancelledAt: now, lastError: 'Nobody to tell.' }).where(eq(tables.reminders.id, reminder.id))
+          continue
+        }
+        await sendMail({ to, subject: message.subject, text: message.text, html: message.html })
+        await db.update(tables.reminders).set({ recipients: to, lastError: null }).where(eq(tables.reminders.id, reminder.id))
+        sent++
+      }
+      catch (error) {
+        await db.update(tables.reminders).set({ sentAt: null, lastError: (error as Error).message }).where(eq(tables.reminders.id, reminder.id))
+        console.error('[shelfstead] Seal-check reminder not sent:', (error as Error).message)
+      }
+    }
+    return sent
+  }
+  finally {
+    running = false
+  }
+}

@@ -1,0 +1,127 @@
+import { and, asc, eq, isNotNull, isNull } from 'drizzle-orm'
+import { REPROCESS_WITHIN_HOURS, bestByDate, localDate, loadCode, sealRate, sealRatesBy, sealWindow } from '../../utils/after'
+import type { SealCheckInput } from '../../utils/schemas/logbook'
+import type { Database } from './database'
+import { badField, loadDetail, nextLoadNumber, refuse, requireLoad } from './logbook'
+
+const when = (d: Date) => d.toLocaleString('en-US', { weekday: 'short', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' })
+
+/**
+ * Record a load's seal check: 12 h or more after it came out (USDA CG "Cooling jars": cool
+ * 12–24 h, then test the seals). Sealed jars go onto the Shelf as a lot with a best-by of the
+ * household's months (12 by default). Jars that cannot go on the Shelf — unsealed ones, or
+ * every jar of an under-processed load — go to the refrigerator list, or into one new pending
+ * load for reprocessing within 24 h with a new lid and the same process time.
+ */
+export async function recordSealCheck(db: Database, householdId: string, userId: string, body: SealCheckInput) {
+  const now = serverNow()
+  const load = await requireLoad(db, householdId, body.loadId)
+  if (load.status !== 'done' || !load.endedAt) refuse('This load has not been run yet: log its run first, then check its seals 12–24 hours after it comes out.', 'loadId')
+  const [existing] = await db.select({ id: tables.sealChecks.id }).from(tables.sealChecks).where(eq(tables.sealChecks.loadId, load.id))
+  if (existing) throw createError({ statusCode: 409, message: `The seal check of load ${loadCode(load.number)} is already recorded.` })
+  const window = sealWindow(load.endedAt, now)
+  if (window.status === 'cooling') {
+    refuse(`Let the jars cool undisturbed: test the seals from ${when(window.dueAt)}, 12 hours after the load came out (USDA Complete Guide, "Cooling jars").`, 'loadId')
+  }
+
+  const [household] = await db.select().from(tables.households).where(eq(tables.households.id, householdId))
+  const lines = await db.select().from(tables.loadLines).where(eq(tables.loadLines.loadId, load.id))
+  const unsafe = load.shortfall !== null
+  const plan = lines.map((line) => {
+    const i = body.lines.findIndex(l => l.loadLineId === line.id)
+    if (i < 0) badField('lines', `Record every line of the load: ${line.product} is missing.`)
+    return { line, input: body.lines[i]!, i }
+  })
+  body.lines.forEach((l, i) => {
+    if (!lines.some(line => line.id === l.loadLineId)) badField(`lines.${i}.loadLineId`, 'That line is not part of this load.')
+  })
+  for (const { line, input, i } of plan) {
+    if (input.sealed + input.unsealed !== line.jars) {
+      badField(`lines.${i}.unsealed`, `Sealed and unsealed jars must add up to the ${line.jars} jars of ${line.product} in this load.`)
+    }
+    const offShelf = unsafe ? line.jars : input.unsealed
+    if (offShelf > 0 && !input.action) {
+      badField(`lines.${i}.action`, unsafe
+        ? 'This load was under-processed, so none of its jars may go on the shelf: choose refrigerate or reprocess.'
+        : 'Choose what to do with the unsealed jars: refrigerate, or reprocess within 24 hours.')
+    }
+    if (offShelf > 0 && input.action === 'reprocess' && now > window.reprocessBy) {
+      refuse(`It is more than ${REPROCESS_WITHIN_HOURS} hours since load ${loadCode(load.number)} came out, too late to reprocess (USDA Complete Guide, "Reprocessing unsealed jars"). Refrigerate the jars and eat them within several days.`, `lines.${i}.action`)
+    }
+  }
+
+  const cannedOn = localDate(load.startedAt ?? load.endedAt)
+  const bestBy = bestByDate(cannedOn, household!.bestByMonths)
+  const code = loadCode(load.number)
+  await db.transaction(async (tx) => {
+    const [check] = await tx.insert(tables.sealChecks).values({ loadId: load.id, householdId, checkedAt: now, checkedBy: userId, notes: body.notes })
+      .onConflictDoNothing().returning()
+    if (!check) throw createError({ statusCode: 409, message: `The seal check of load ${code} is already recorded.` })
+    const reprocess: Array<{ line: typeof lines[number], jars: number }> = []
+    for (const { line, input } of plan) {
+      const offShelf = unsafe ? line.jars : input.unsealed
+      const toShelf = line.jars - offShelf
+      await tx.update(tables.loadLines).set({ sealed: input.sealed, unsealed: input.unsealed, unsealedAction: offShelf > 0 ? input.action! : null })
+        .where(eq(tables.loadLines.id, line.id))
+      if (toShelf > 0) {
+        await tx.insert(tables.shelfLots).values({
+          householdId, loadId: load.id, loadLineId: line.id, recipeId: line.recipeId, product: line.product, jarSizeId: line.jarSizeId,
+          loadCode: code, cannedOn, bestBy, jarsIn: toShelf, jarsLeft: toShelf, source: 'seal-check', shelvedAt: now,
+        })
+      }
+      if (offShelf > 0 && input.action === 'refrigerate') {
+        await tx.insert(tables.fridgeItems).values({ householdId, loadId: load.id, loadLineId: line.id, product: line.product, jarSizeId: line.jarSizeId, jars: offShelf, refrigeratedAt: now })
+      }
+      if (offShelf > 0 && input.action === 'reprocess') reprocess.push({ line, jars: offShelf })
+    }
+    if (reprocess.length) {
+      const number = await nextLoadNumber(tx, householdId)
+      const [again] = await tx.insert(tables.canningLoads).values({
+        householdId, number, status: 'pending', reprocessOfId: load.id, planId: load.planId, planLoadIndex: load.planLoadIndex,
+        cannerId: load.cannerId, cannerName: load.cannerName, gaugeType: load.gaugeType, altitudeFt: load.altitudeFt,
+        requiredPsi: load.requiredPsi, requiredMinutes: load.requiredMinutes, requiredSource: load.requiredSource,
+        deadlineAt: window.reprocessBy, createdBy: userId,
+        notes: `Reprocessing ${reprocess.reduce((s, r) => s + r.jars, 0)} jars from load ${code}: remove the lids, check the rims, use new lids, and process for the same time.`,
+      }).returning({ id: tables.canningLoads.id })
+      await tx.insert(tables.loadLines).values(reprocess.map((r, i) => ({
+        loadId: again!.id, householdId, lineIndex: i, recipeId: r.line.recipeId, product: r.line.product, jarSizeId: r.line.jarSizeId, jars: r.jars,
+      })))
+    }
+    await tx.update(tables.reminders).set({ cancelledAt: now, updatedAt: now })
+      .where(and(eq(tables.reminders.loadId, load.id), eq(tables.reminders.kind, 'seal-check')))
+  })
+  return loadDetail(db, householdId, load.id)
+}
+
+/** Seal success per recipe, per canner and for the household, from every recorded check. */
+export async function sealRates(db: Database, householdId: string) {
+  const rows = await db.select({
+    recipeId: tables.loadLines.recipeId,
+    product: tables.loadLines.product,
+    sealed: tables.loadLines.sealed,
+    unsealed: tables.loadLines.unsealed,
+    cannerId: tables.canningLoads.cannerId,
+    cannerName: tables.canningLoads.cannerName,
+    recipeName: tables.recipes.name,
+  })
+    .from(tables.loadLines)
+    .innerJoin(tables.canningLoads, eq(tables.canningLoads.id, tables.loadLines.loadId))
+    .leftJoin(tables.recipes, eq(tables.recipes.id, tables.loadLines.recipeId))
+    .where(and(eq(tables.loadLines.householdId, householdId), isNotNull(tables.loadLines.sealed)))
+  return {
+    household: sealRate(rows),
+    byRecipe: sealRatesBy(rows, r => ({ id: r.recipeId ?? `product:${r.product}`, name: r.recipeName ?? r.product })),
+    byCanner: sealRatesBy(rows, r => ({ id: r.cannerId ?? `canner:${r.cannerName}`, name: r.cannerName })),
+  }
+}
+
+export async function fridgeList(db: Database, householdId: string) {
+  const rows = await db.select({
+    id: tables.fridgeItems.id, product: tables.fridgeItems.product, jarSizeId: tables.fridgeItems.jarSizeId, jars: tables.fridgeItems.jars,
+    refrigeratedAt: tables.fridgeItems.refrigeratedAt, loadId: tables.fridgeItems.loadId, loadNumber: tables.canningLoads.number,
+  }).from(tables.fridgeItems)
+    .innerJoin(tables.canningLoads, eq(tables.canningLoads.id, tables.fridgeItems.loadId))
+    .where(and(eq(tables.fridgeItems.householdId, householdId), isNull(tables.fridgeItems.clearedAt)))
+    .orderBy(asc(tables.fridgeItems.refrigeratedAt))
+  return rows.map(r => ({ ...r, loadCode: loadCode(r.loadNumber) }))
+}

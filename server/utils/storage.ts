@@ -1,0 +1,54 @@
+import { join } from 'node:path'
+import { createStorage, type Storage } from 'unstorage'
+import fsDriver from 'unstorage/drivers/fs'
+import s3Driver from 'unstorage/drivers/s3'
+import { resolveDataDir } from './dataDir'
+
+/**
+ * Where photos are kept. SHELFSTEAD_STORAGE=s3 uses an S3-compatible bucket (S3_ENDPOINT,
+ * S3_BUCKET, S3_REGION, S3_ACCESS_KEY_ID, S3_SECRET_ACCESS_KEY); anything else keeps them in
+ * `photos/` under the data directory.
+ */
+let storage: Storage | undefined
+
+export function storageKind(env: NodeJS.ProcessEnv = process.env): 'fs' | 's3' {
+  return env.SHELFSTEAD_STORAGE?.toLowerCase() === 's3' ? 's3' : 'fs'
+}
+
+export function usePhotoStorage(): Storage {
+  if (storage) return storage
+  const env = process.env
+  if (storageKind(env) === 's3') {
+    const missing = ['S3_ENDPOINT', 'S3_BUCKET', 'S3_ACCESS_KEY_ID', 'S3_SECRET_ACCESS_KEY'].filter(k => !env[k])
+    if (missing.length) throw new Error(`SHELFSTEAD_STORAGE=s3 needs ${missing.join(', ')}.`)
+    storage = createStorage({
+      driver: s3Driver({
+        endpoint: env.S3_ENDPOINT!,
+        bucket: env.S3_BUCKET!,
+        region: env.S3_REGION || 'us-east-1',
+        accessKeyId: env.S3_ACCESS_KEY_ID!,
+        secretAccessKey: env.S3_SECRET_ACCESS_KEY!,
+      }),
+    })
+  }
+  else {
+    storage = createStorage({ driver: fsDriver({ base: join(resolveDataDir(), 'photos') }) })
+  }
+  return storage
+}
+
+export const MAX_PHOTO_BYTES = 8 * 1024 * 1024
+
+export type ImageType = 'image/jpeg' | 'image/png' | 'image/webp'
+
+/** The image type from the file's first bytes (its "magic number"), never from its name or the browser's claim. */
+export function detectImageType(bytes: Uint8Array): ImageType | null {
+  const starts = (sig: number[], at = 0) => sig.every((b, i) => bytes[at + i] === b)
+  if (bytes.length >= 3 && starts([0xFF, 0xD8, 0xFF])) return 'image/jpeg'
+  if (bytes.length >= 8 && starts([0x89, 0x50, 0x4E, 0x47, 0x0D, 0x0A, 0x1A, 0x0A])) return 'image/png'
+  // RIFF <size> WEBP
+  if (bytes.length >= 12 && starts([0x52, 0x49, 0x46, 0x46]) && starts([0x57, 0x45, 0x42, 0x50], 8)) return 'image/webp'
+  return null
+}
+
+export const imageExtension: Record<ImageType, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp' }
