@@ -3,6 +3,7 @@ import type { Database } from '../../utils/database'
 import * as t from '../schema'
 import { ingredientSeed, jarSizeSeed, recipePressureBandSeed, recipeSeed } from './reference'
 import { seedDemoHousehold } from './demo'
+import { seedDemoSeason } from './demo-season'
 
 /**
  * Insert the published reference data. Idempotent: rows already present (by id) are left as
@@ -29,6 +30,6 @@ export async function seedDemoIfEmpty(
 ): Promise<boolean> {
   const [row] = await db.select({ users: count() }).from(t.users)
   if ((row?.users ?? 0) > 0) return false
-  await seedDemoHousehold(db, hashPassword)
+  await seedDemoSeason(db, await seedDemoHousehold(db, hashPassword))
   return true
 }
