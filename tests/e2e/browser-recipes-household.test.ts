@@ -71,6 +71,17 @@ describe('Recipe book and Household in Chromium', () => {
     expect(await rowText(page, '[data-jar="pint"]')).toBe('Pint jars 75 min')
     await screenshot(page, 'recipes-4-house-recipe')
 
+    // Editing keeps the choices made, and a new basis brings its own table (CG Guide 4, beans in sauce: pints 65 min).
+    await page.getByRole('link', { name: 'Edit' }).click()
+    await page.waitForURL(/\/edit$/)
+    expect(await page.getByLabel('Pint jars', { exact: true }).isChecked()).toBe(true)
+    expect(await page.getByLabel('Salt per pint').inputValue()).toBe('0.25')
+    await page.getByLabel('Borrow time and pressure from').selectOption({ label: 'Dried beans with tomato or molasses sauce' })
+    await page.getByRole('button', { name: 'Save changes' }).click()
+    await page.waitForURL(/\/recipes\/house-[^/]+$/)
+    await page.getByText('Time and pressure borrowed from the tested recipe Dried beans with tomato or molasses sauce').waitFor()
+    expect(await rowText(page, '[data-jar="pint"]')).toBe('Pint jars 65 min')
+
     const phone = await browser.newPage({ viewport: { width: 360, height: 780 } })
     await signIn(phone, server.url, 'canner@demo.shelfstead.test')
     await phone.goto(`${server.url}/recipes`)
@@ -107,9 +118,27 @@ describe('Recipe book and Household in Chromium', () => {
     expect(await added.textContent()).toContain('12 in')
     await screenshot(page, 'household-1-canner-added-us')
 
+    // A price is typed in currency units and pounds, and shown back the same way.
+    await page.getByRole('button', { name: 'Add a price' }).click()
+    await page.getByLabel('What it is').selectOption('salt')
+    await page.getByLabel('As the package says').fill('Pickling salt, 2 lb bag')
+    await page.getByLabel('Package weight').fill('2')
+    await page.getByLabel('Price', { exact: true }).fill('-1')
+    await page.getByRole('button', { name: 'Add to price list' }).click()
+    expect(await visible(page.getByText('A price cannot be negative.'))).toBe(true)
+    await page.getByLabel('Price', { exact: true }).fill('2.50')
+    await page.getByRole('button', { name: 'Add to price list' }).click()
+    const saltRow = page.locator('tbody tr').filter({ hasText: 'Pickling salt, 2 lb bag' })
+    expect(await visible(saltRow)).toBe(true)
+    expect((await saltRow.innerText()).replace(/\s+/g, ' ')).toContain('Salt 2 lb 2.50 1.25 / lb')
+
+    await page.getByLabel('Quart, wide mouth').fill('4')
+    await page.getByRole('button', { name: 'Save jar counts' }).click()
+    expect(await visible(page.getByRole('region', { name: 'Empty jars owned' }).getByRole('status'))).toBe(true)
+
     await page.getByLabel('Units').selectOption('metric')
     await page.getByRole('button', { name: 'Save settings' }).click()
-    expect(await visible(page.getByRole('status').filter({ hasText: 'Saved.' }))).toBe(true)
+    expect(await visible(page.getByRole('region', { name: 'Settings' }).getByRole('status'))).toBe(true)
     // 12 in × 25.4 = 304.8 mm, shown to the whole mm.
     expect(await visible(added.getByText('305 mm'))).toBe(true)
     expect(await added.textContent()).not.toContain(' in')
