@@ -11,6 +11,7 @@ export default defineConfig({
           name: 'unit',
           include: ['tests/unit/**/*.test.ts'],
           environment: 'node',
+          benchmark: { include: ['tests/bench/**/*.bench.ts'] },
         },
       },
       await defineVitestProject({

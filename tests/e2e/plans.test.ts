@@ -1,4 +1,5 @@
 import convert from 'convert-units'
+import fc from 'fast-check'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { ApiClient, startServer, type RunningServer } from '../support/server'
 
@@ -207,5 +208,35 @@ describe('saved plans', () => {
     const after = await canner.get(`/api/households/${householdId}/plans/${planId}`)
     expect(after.body.plan.request.cannerId).toBe(tallCannerId)
     expect((await canner.get(`/api/households/${householdId}/plans`)).body.length).toBe(before + 1)
+  })
+})
+
+describe('preview never fails with a server error', () => {
+  it('answers 200, 400 or 422 (with a message) for random plan bodies, never 500', async () => {
+    const recipeIds = ['usda-dried-beans-hot-pack', 'usda-beans-in-sauce', 'usda-baked-beans', 'usda-bean-soup', 'usda-fresh-lima-hot-pack', 'house-dry-pack-beans', 'nope']
+    const jarIds = ['half-pint-regular', 'pint-regular', 'pint-wide', 'pint-and-a-half-wide', 'quart-regular', 'quart-wide', 'half-gallon-wide', 'nope']
+    const amount = fc.oneof(
+      fc.record({ jars: fc.oneof(fc.integer({ min: -5, max: 600 }), fc.double({ noNaN: true, min: -1, max: 50 })) }),
+      fc.record({ dryGrams: fc.double({ noNaN: true, min: -10, max: 600_000 }) }),
+      fc.record({ packages: fc.array(fc.record({ grams: fc.double({ noNaN: true, min: -1, max: 60_000 }), count: fc.integer({ min: -1, max: 250 }) }), { maxLength: 3 }) }),
+      fc.record({ jarsPerMonth: fc.double({ noNaN: true, min: -1, max: 250 }), months: fc.integer({ min: -1, max: 40 }), jarsOnShelf: fc.integer({ min: -1, max: 300 }) }),
+      fc.record({ jars: fc.integer({ min: 1, max: 40 }), dryMlPerJar: fc.double({ noNaN: true, min: 0, max: 400 }), saltTsp: fc.double({ noNaN: true, min: -1, max: 4 }) }),
+    )
+    const line = fc.tuple(fc.constantFrom(...recipeIds), fc.constantFrom(...jarIds), amount)
+      .map(([recipeId, jarSizeId, a]) => ({ recipeId, jarSizeId, ...a }))
+    const body = fc.record({
+      altitudeFt: fc.option(fc.integer({ min: -2000, max: 32_000 }), { nil: undefined }),
+      two: fc.boolean(),
+      lines: fc.array(line, { minLength: 0, maxLength: 4 }),
+    })
+    await fc.assert(fc.asyncProperty(body, async ({ altitudeFt, two, lines }) => {
+      const res = await preview(canner, {
+        ...(two ? { cannerIds: [tallCannerId, everydayCannerId] } : { cannerId: everydayCannerId }),
+        ...(altitudeFt === undefined ? {} : { altitudeFt }),
+        lines,
+      })
+      expect([200, 400, 422]).toContain(res.status)
+      if (res.status !== 200) expect(String(res.body.message).length).toBeGreaterThan(10)
+    }), { numRuns: 120 })
   })
 })
