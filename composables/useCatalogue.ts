@@ -44,6 +44,8 @@ export interface RecipeView {
   processMinutes: Array<{ jarKey: string, minutes: number }>
   pressureBands: PressureBandView[]
   ingredient: IngredientView | null
+  /** A house recipe's tested basis, whose process table it copies. */
+  basedOn: { id: string, name: string, source: string } | null
 }
 
 export interface CannerView {
@@ -97,7 +99,7 @@ export function useActiveHousehold() {
 }
 
 export function useRecipes(householdId: Ref<string | null>) {
-  return useFetch<Array<RecipeView & { basedOn: string | null }>>('/api/recipes', {
+  return useFetch<RecipeView[]>('/api/recipes', {
     key: computed(() => `recipes-${householdId.value}`),
     query: { householdId },
     immediate: Boolean(householdId.value),
@@ -106,7 +108,7 @@ export function useRecipes(householdId: Ref<string | null>) {
 }
 
 export function useRecipe(householdId: Ref<string | null>, recipeId: Ref<string>) {
-  return useFetch<RecipeView & { basedOn: { id: string, name: string, source: string } | null }>(() => `/api/recipes/${recipeId.value}`, {
+  return useFetch<RecipeView>(() => `/api/recipes/${recipeId.value}`, {
     key: computed(() => `recipe-${householdId.value}-${recipeId.value}`),
     query: { householdId },
     immediate: Boolean(householdId.value),

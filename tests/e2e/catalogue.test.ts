@@ -110,7 +110,7 @@ describe('house recipes', () => {
     expect(pintMinutes(res.body)).toBe(75)
     expect(res.body.pressureBands.filter((b: { gaugeType: string }) => b.gaugeType === 'dial')).toHaveLength(4)
     const list = await helper.get(recipesPath())
-    expect(list.body.find((r: { id: string }) => r.id === createdId)?.status).toBe('house')
+    expect(list.body.find((r: { id: string }) => r.id === createdId)).toMatchObject({ status: 'house', basedOn: { id: 'usda-dried-beans-hot-pack', name: 'Dried beans or peas, hot pack' } })
   })
 
   it('refuses a body that sets its own process minutes or pressure, naming the field', async () => {

@@ -5,9 +5,12 @@ export default defineEventHandler(async (event) => {
   const { householdId } = await getValidatedQuery(event, validateWith(HouseholdQuerySchema))
   const { db } = await requireHouseholdRole(event, householdId, 'helper')
   const { recipes, ingredients } = await loadCatalogue(db, householdId)
-  return recipes.map(recipe => ({
-    ...recipe,
-    ingredient: ingredients.find(i => i.id === recipe.ingredientId) ?? null,
-    basedOn: recipes.find(r => r.id === recipe.basedOnRecipeId)?.name ?? null,
-  }))
+  return recipes.map((recipe) => {
+    const basedOn = recipes.find(r => r.id === recipe.basedOnRecipeId)
+    return {
+      ...recipe,
+      ingredient: ingredients.find(i => i.id === recipe.ingredientId) ?? null,
+      basedOn: basedOn ? { id: basedOn.id, name: basedOn.name, source: basedOn.source } : null,
+    }
+  })
 })
