@@ -1,6 +1,7 @@
 import { mailMode, parseMessage, startFakeSmtp, stopFakeSmtp } from '../utils/mail'
 import { useDB } from '../utils/database'
 import { sendDueReminders } from '../utils/reminders'
+import { serverNow } from '../utils/clock'
 
 /**
  * Mail at start-up: the local fake SMTP server when mail is in `fake` mode (development, demo,
@@ -9,6 +10,7 @@ import { sendDueReminders } from '../utils/reminders'
  * so reminders that fell due while the server was down go out after a restart.
  */
 export default defineNitroPlugin((nitroApp) => {
+  serverNow() // reads SHELFSTEAD_NOW_OFFSET_MS once, and says so when it is ignored
   const mode = mailMode()
   if (mode === 'fake') {
     startFakeSmtp(async ({ from, to, raw }) => {
