@@ -45,7 +45,7 @@ const season: DemoLoad[] = [
 ]
 
 /** Jars eaten in a month: a household of three eats a few pints a week. */
-const monthlyUse = [9, 11, 8, 12, 10, 9, 13, 10, 11, 9, 12]
+const monthlyUse = [6, 7, 5, 8, 6, 7, 8, 6, 7, 5, 7]
 
 async function recipesFor(tx: Tx, ids: string[]): Promise<Map<string, Recipe>> {
   const [rows, specs, bands] = await Promise.all([
