@@ -211,6 +211,30 @@ describe('saved plans', () => {
   })
 })
 
+describe('a saved plan that today\'s data refuses', () => {
+  it('still opens (with the refusal) and can still be renamed', async () => {
+    const created = await canner.post(`/api/households/${householdId}/plans`, { name: 'Dial gauge pints', request: { cannerId: everydayCannerId, lines: [{ recipeId: 'usda-dried-beans-hot-pack', jarSizeId: 'pint-regular', jars: 9 }] } })
+    expect(created.status).toBe(201)
+    const planId = created.body.plan.id
+    const owner = new ApiClient(server.url)
+    await owner.login('owner@demo.shelfstead.test')
+    // USDA CG Table 1 stops at 8,000 ft for dial gauges
+    await owner.patch(`/api/households/${householdId}`, { altitudeFt: 8200 })
+    try {
+      const read = await helper.get(`/api/households/${householdId}/plans/${planId}`)
+      expect(read.status).toBe(200)
+      expect(read.body.result).toBeNull()
+      expect(read.body.refusal.message).toMatch(/8,?000/)
+      const renamed = await canner.patch(`/api/households/${householdId}/plans/${planId}`, { name: 'Dial gauge pints (moved house)' })
+      expect(renamed.status).toBe(200)
+      expect(renamed.body.plan.name).toBe('Dial gauge pints (moved house)')
+    }
+    finally {
+      await owner.patch(`/api/households/${householdId}`, { altitudeFt: 2350 })
+    }
+  })
+})
+
 describe('preview never fails with a server error', () => {
   it('answers 200, 400 or 422 (with a message) for random plan bodies, never 500', async () => {
     const recipeIds = ['usda-dried-beans-hot-pack', 'usda-beans-in-sauce', 'usda-baked-beans', 'usda-bean-soup', 'usda-fresh-lima-hot-pack', 'house-dry-pack-beans', 'nope']

@@ -12,12 +12,17 @@ export default defineEventHandler(async (event) => {
   }
   const passwordHash = await hashPassword(body.password)
   const user = await db.transaction(async (tx) => {
+    // The unique index on lower(email) settles two sign-ups racing for one address.
     const [created] = await tx.insert(tables.users)
       .values({ email: body.email, name: body.name, passwordHash })
       .returning()
     const [household] = await tx.insert(tables.households).values({ name: body.householdName }).returning()
     await tx.insert(tables.memberships).values({ userId: created!.id, householdId: household!.id, role: 'owner' })
     return created!
+  }).catch((error: unknown) => {
+    const code = (error as { code?: string, cause?: { code?: string } }).code ?? (error as { cause?: { code?: string } }).cause?.code
+    if (code === '23505') throw createError({ statusCode: 409, message: 'An account with that e-mail already exists. Sign in instead.' })
+    throw error
   })
   await setUserSession(event, { user: { id: user.id, email: user.email, name: user.name, isAdmin: user.isAdmin } })
   setResponseStatus(event, 201)

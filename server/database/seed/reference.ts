@@ -103,6 +103,8 @@ export interface RecipeSeed {
   steps: string
   source: string
   caution: string | null
+  /** House recipes name the tested recipe whose process table they borrow. */
+  basedOnRecipeId?: string
   jarSpecs: Array<{ sizeKey: string, dryGrams: number | null, saltTsp: number | null, processMinutes: number }>
 }
 
@@ -209,6 +211,7 @@ export const recipeSeed: RecipeSeed[] = [
     summary: 'Rinsed dry beans measured straight into jars, topped with boiling water. A household practice.',
     steps: 'Sort and rinse the dry beans. Measure no more than the fill cap into each hot jar, add salt if you like, fill with boiling water to 1 inch headspace, wipe rims with vinegar, lid and load.',
     source: 'Household practice; no published process. Time and pressure borrowed from the USDA hot-pack table (CG Guide 4), which was tested only for soaked and boiled beans.',
+    basedOnRecipeId: 'usda-dried-beans-hot-pack',
     caution: 'Untested — your own risk. Dry-packing (no soak) is not a laboratory-tested process: USDA and extension guidance (OSU EM 9435, 2024; Penn State Extension) say dried beans must be hydrated before canning. Never exceed the fill cap: beans swell about threefold and can crowd out the liquid or break the jar.',
     jarSpecs: [
       { sizeKey: 'pint', dryGrams: null, saltTsp: 0.25, processMinutes: 75 },

@@ -8,10 +8,15 @@ export default defineEventHandler(async (event) => {
   const body = await readValidatedBody(event, validateWith(PlanUpdateSchema))
   const { db } = await requireHouseholdRole(event, id, 'canner')
   const current = await requirePlan(db, id, planId)
-  const request = body.request ?? current.request
-  const result = await computePlan(db, id, request)
+  // Only a new request is recomputed (and refused with 422); renaming never depends on today's data.
+  const result = body.request ? await computePlan(db, id, body.request) : null
   const [plan] = await db.update(tables.plans)
-    .set({ name: body.name ?? current.name, status: body.status ?? current.status, request, summary: planSummary(result), updatedAt: new Date() })
+    .set({
+      name: body.name ?? current.name,
+      status: body.status ?? current.status,
+      ...(body.request && result ? { request: body.request, summary: planSummary(result) } : {}),
+      updatedAt: new Date(),
+    })
     .where(eq(tables.plans.id, current.id))
     .returning()
   return { plan, result }
