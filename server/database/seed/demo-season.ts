@@ -144,7 +144,7 @@ export async function seedDemoSeason(db: Database, householdId: string, now = ne
     }).returning()
     lots.push({ id: old!.id, jarsLeft: 3, cannedOn: oldCanned })
 
-    // Jars eaten month by month, oldest first; the old kidney beans were forgotten at the back.
+    // Jars eaten month by month, oldest lots first; the old kidney beans were forgotten at the back.
     for (const [m, jars] of monthlyUse.entries()) {
       const movedAt = new Date(now.getTime() - (320 - m * 29) * DAY)
       let left = jars
@@ -154,7 +154,8 @@ export async function seedDemoSeason(db: Database, householdId: string, now = ne
         if (left === 0) break
         const [row] = await tx.select({ shelvedAt: t.shelfLots.shelvedAt }).from(t.shelfLots).where(eq(t.shelfLots.id, lot.id))
         if (row!.shelvedAt > movedAt) continue
-        const take = Math.min(left, lot.jarsLeft)
+        // A few jars from each lot: a household eats several products in a month.
+        const take = Math.min(left, lot.jarsLeft, 3)
         lot.jarsLeft -= take
         left -= take
         await tx.insert(t.shelfMovements).values({ householdId, batchId, lotId: lot.id, jars: take, jarsReturned: 0, movedAt, movedBy: owner?.id ?? null })
