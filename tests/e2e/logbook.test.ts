@@ -252,6 +252,10 @@ describe('the Logbook list', () => {
     expect(dial.rows.map((r: { code: string }) => r.code)).toEqual(['L-003'])
     const future = (await owner.get(api(`/loads?from=${monthsFromToday(1, 1)}`))).body
     expect(future.total).toBe(0)
+    const byJars = (await owner.get(api('/loads?sort=-jars'))).body.rows.map((r: { jars: number }) => r.jars)
+    expect(byJars).toEqual([...byJars].sort((a, b) => b - a))
+    expect(byJars[0]).toBe(18)
+    for (const key of ['startedAt', 'canner', 'pressurePsi', 'processMinutes']) expect((await owner.get(api(`/loads?sort=${key}`))).status).toBe(200)
     const bad = await owner.get(api('/loads?sort=colour'))
     expect(bad.status).toBe(400)
     expect(bad.body.message).toMatch(/^sort:/)
