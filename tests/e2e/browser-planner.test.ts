@@ -104,6 +104,9 @@ describe('Batch planner in Chromium', () => {
     expect(await boxes.nth(2).isChecked()).toBe(false)
     expect(await page.getByText('checked by Wren Okafor').count()).toBe(2)
     await screenshot(page, 'planner-c-helper-checked-off')
+    await page.getByLabel('E-mail this list to').selectOption({ label: 'Wren Okafor (helper@demo.shelfstead.test)' })
+    await page.getByRole('button', { name: 'Send the list' }).click()
+    expect(await visible(page.getByText('Sent to helper@demo.shelfstead.test.'))).toBe(true)
   })
 
   it('(d) after switching to metric the planner shows grams and millilitres, not cups or pounds', async () => {
