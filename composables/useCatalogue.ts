@@ -1,4 +1,4 @@
-import type { GaugeType, UnitSystem } from '~/utils/planning'
+import type { Canner, GaugeType, UnitSystem } from '~/utils/planning'
 import type { HouseholdRole } from '~/utils/schemas/household'
 
 export interface IngredientView {
@@ -48,18 +48,8 @@ export interface RecipeView {
   basedOn: { id: string, name: string, source: string } | null
 }
 
-export interface CannerView {
-  id: string
-  name: string
-  innerDiameterMm: number
-  usableHeightMm: number
-  rackThicknessMm: number
-  gaugeType: GaugeType
-  maxLayers: number
-  waterDepthMm: number
-  lastGaugeTestAt: string | null
-  gaugeTestDue: boolean
-}
+/** A canner as the planner sees it, plus whether its dial gauge is due for its yearly test. */
+export type CannerView = Canner & { gaugeTestDue: boolean }
 
 export interface PriceItemView {
   id: string
