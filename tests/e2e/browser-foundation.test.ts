@@ -35,6 +35,11 @@ describe('first visit in Chromium', () => {
     expect(await visible(page.getByText('Brandvold pantry').first())).toBe(true)
     expect(existsSync(await screenshot(page, 'foundation-1-pantry-board-new-account'))).toBe(true)
 
+    // a new household has no canner yet: the planner says what to do instead of spinning
+    await page.goto(`${server.url}/plan`)
+    expect(await visible(page.getByRole('heading', { name: 'No canner yet' }))).toBe(true)
+    expect(await page.getByRole('link', { name: 'Add a canner' }).getAttribute('href')).toBe('/household')
+
     await page.getByRole('button', { name: 'Sign out' }).click()
     await page.waitForURL(/\/login/)
 
