@@ -1,68 +1,27 @@
-import type { Canner, GaugeType, UnitSystem } from '~/utils/planning'
+import type { IngredientRow, JarSizeRow, PriceItemRow, RecipeRow, recipePressureBands } from '~/server/database/schema'
+import type { Canner, Recipe, UnitSystem } from '~/utils/planning'
 import type { HouseholdRole } from '~/utils/schemas/household'
 
-export interface IngredientView {
-  id: string
-  name: string
-  form: 'dry' | 'fresh'
-  gramsPerCup: number
-  gramsPerCupSource: string
-  expansionRatio: number
-  expansionSource: string
-}
+/** Rows as the API sends them: the database row types, less what the API leaves out. */
+export type IngredientView = IngredientRow
+export type JarSizeView = Omit<JarSizeRow, 'sortOrder'>
 
-export interface JarSizeView {
-  id: string
-  name: string
-  sizeKey: string
-  capacityMl: number
-  outsideDiameterMm: number
-  heightMm: number
-  mouth: 'regular' | 'wide'
-  dimensionsNote: string
-}
+type RecipePressureBandRow = typeof recipePressureBands.$inferSelect
+export type PressureBandView = Omit<RecipePressureBandRow, 'recipeId'>
 
-export interface PressureBandView { gaugeType: GaugeType, minFt: number, maxFt: number, psi: number, source: string }
-
-export interface RecipeView {
-  id: string
-  householdId: string | null
-  name: string
-  status: 'tested' | 'house'
-  packStyle: 'hot' | 'raw' | 'dry'
-  ingredientId: string
-  headspaceMm: number
-  solidsFillFraction: number
-  fillBasis: 'cap' | 'published'
-  summary: string
-  steps: string
-  source: string
-  caution?: string
-  cautionNote: string | null
-  basedOnRecipeId: string | null
-  perJar: Array<{ jarKey: string, dryGrams?: number, saltTsp?: number }>
-  processMinutes: Array<{ jarKey: string, minutes: number }>
-  pressureBands: PressureBandView[]
-  ingredient: IngredientView | null
-  /** A house recipe's tested basis, whose process table it copies. */
-  basedOn: { id: string, name: string, source: string } | null
-}
+export type RecipeView = Omit<RecipeRow, 'caution' | 'createdBy' | 'createdAt' | 'updatedAt'>
+  & Pick<Recipe, 'caution' | 'perJar' | 'processMinutes'>
+  & {
+    pressureBands: PressureBandView[]
+    ingredient: IngredientView | null
+    /** A house recipe's tested basis, whose process table it copies. */
+    basedOn: { id: string, name: string, source: string } | null
+  }
 
 /** A canner as the planner sees it, plus whether its dial gauge is due for its yearly test. */
 export type CannerView = Canner & { gaugeTestDue: boolean }
 
-export interface PriceItemView {
-  id: string
-  kind: 'ingredient' | 'salt' | 'lid' | 'jar' | 'vinegar'
-  label: string
-  ingredientId: string | null
-  jarSizeId: string | null
-  mouth: 'regular' | 'wide' | null
-  packageGrams: number | null
-  packageMl: number | null
-  packCount: number | null
-  priceCents: number
-}
+export type PriceItemView = Omit<PriceItemRow, 'householdId' | 'createdAt' | 'updatedAt'>
 
 export interface JarStockView { jarSizeId: string, name: string, sizeKey: string, mouth: 'regular' | 'wide', count: number }
 

@@ -4,7 +4,7 @@
  * Sources: ../shared/reference/canning-reference.md (USDA Complete Guide to Home Canning,
  * AIB 539, rev. 2015 — "CG"; MSU Extension "Preserving Food Safely" reprints; USDA SR Legacy).
  */
-import type { GaugeType } from '../schema'
+import type { GaugeType, recipeJarSpecs, recipes } from '../schema'
 
 const INCH_MM = 25.4
 const POUND_G = 453.59237
@@ -90,22 +90,9 @@ const QUART_DRY_G = 0.75 * POUND_G
 
 const HYDRATE = 'Sort and rinse the beans. Soak 12–18 hours in cold water in a cool place, or cover with boiling water, boil 2 minutes, take off the heat and soak 1 hour. Drain.'
 
-export interface RecipeSeed {
-  id: string
-  name: string
-  status: 'tested' | 'house'
-  packStyle: 'hot' | 'raw' | 'dry'
-  ingredientId: string
-  headspaceMm: number
-  solidsFillFraction: number
-  fillBasis: 'cap' | 'published'
-  summary: string
-  steps: string
-  source: string
-  caution: string | null
-  /** House recipes name the tested recipe whose process table they borrow. */
-  basedOnRecipeId?: string
-  jarSpecs: Array<{ sizeKey: string, dryGrams: number | null, saltTsp: number | null, processMinutes: number }>
+/** A shared library recipe row, with its per-jar-size specs beside it. */
+export type RecipeSeed = Omit<typeof recipes.$inferInsert, 'householdId' | 'createdBy' | 'createdAt' | 'updatedAt'> & {
+  jarSpecs: Array<Omit<typeof recipeJarSpecs.$inferInsert, 'recipeId'>>
 }
 
 export const recipeSeed: RecipeSeed[] = [

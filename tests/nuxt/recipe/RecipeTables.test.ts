@@ -5,7 +5,7 @@ import RecipePressureTable from '~/components/recipe/RecipePressureTable.vue'
 import type { JarSizeView, PressureBandView } from '~/composables/useCatalogue'
 
 const jar = (id: string, sizeKey: string, name: string, capacityMl: number): JarSizeView =>
-  ({ id, sizeKey, name, capacityMl, outsideDiameterMm: 80, heightMm: 130, mouth: 'regular', dimensionsNote: '' })
+  ({ id, sizeKey, name, capacityMl, outsideDiameterMm: 80, heightMm: 130, mouth: 'regular', dimensionsNote: '', capacitySource: 'NIST' })
 const jarSizes = [jar('quart-regular', 'quart', 'Quart, regular mouth', 946.35), jar('pint-regular', 'pint', 'Pint, regular mouth', 473.18)]
 
 const cells = (row: { findAll: (s: string) => Array<{ text: () => string }> }) => row.findAll('th, td').map(c => c.text().replace(/\s+/g, ' ').trim())
