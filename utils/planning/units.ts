@@ -123,6 +123,9 @@ export function formatVolume(ml: number, system: UnitSystem): string {
   }
   const cups = mlToCups(ml)
   if (cups < 3.99) return kitchenMeasure(cups, 'cup').text
+  // Jugs are sold by the gallon: a whole number of gallons reads as such, not as "4.0 qt".
+  const gallons = convert(ml).from('ml').to('gal')
+  if (Math.round(gallons) >= 1 && Math.abs(gallons - Math.round(gallons)) < 0.005) return `${Math.round(gallons)} gal`
   return `${grouped(convert(ml).from('ml').to('qt'), 1)} qt`
 }
 

@@ -85,6 +85,9 @@ describe('display in the household units', () => {
     expect(formatVolume(NIST.cup * 1.25, 'us')).toBe('1¼ cups')
     expect(formatVolume(NIST.quart * 2.5, 'us')).toBe('2.5 qt')
     expect(formatVolume(NIST.quart, 'us')).toBe('1.0 qt')
+    // NIST: 1 US gallon = 3785.411784 mL; a gallon jug of vinegar reads as a gallon
+    expect(formatVolume(3785.411784, 'us')).toBe('1 gal')
+    expect(formatVolume(3785.411784 * 1.1, 'us')).toBe('4.4 qt')
     expect(formatVolume(301, 'metric')).toBe('300 mL')
     expect(formatVolume(2500, 'metric')).toBe('2.50 L')
     expect(mlToCups(NIST.pint)).toBeCloseTo(2, 6)
