@@ -20,7 +20,8 @@ export async function screenshot(page: Page, name: string): Promise<string> {
 }
 
 export async function signIn(page: Page, base: string, email: string, password = 'put-up-2026') {
-  await page.goto(`${base}/login`)
+  // wait until the page's scripts have run, so the form is hydrated before it is filled
+  await page.goto(`${base}/login`, { waitUntil: 'networkidle' })
   await page.getByLabel('E-mail').fill(email)
   await page.getByLabel('Password').fill(password)
   await page.getByRole('button', { name: 'Sign in' }).click()
