@@ -3,20 +3,15 @@ import { join, resolve } from 'node:path'
 
 // Root layout: pages/, components/, composables/, stores/, utils/ sit beside server/ at the top level.
 export default defineNuxtConfig({
-  compatibilityDate: '2026-11-01',
-  srcDir: '.',
   dir: { app: 'app' },
+  srcDir: '.',
   serverDir: 'server',
+  compatibilityDate: '2026-11-01',
   // Separate build and output folders let several builds run side by side (tests, benchmarks).
   ...(process.env.SHELFSTEAD_BUILD_DIR ? { buildDir: process.env.SHELFSTEAD_BUILD_DIR } : {}),
-  telemetry: false,
-  devtools: { enabled: false },
-  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils'],
-  css: ['~/assets/css/main.css'],
-  // main.css holds the @tailwind directives; stop the module from injecting a second copy.
-  tailwindcss: { cssPath: false },
-  typescript: { strict: true },
+  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', 'nuxt-auth-utils', '@nuxt/eslint'],
   imports: { dirs: ['stores'] },
+  devtools: { enabled: false },
   app: {
     head: {
       htmlAttrs: { lang: 'en' },
@@ -29,15 +24,18 @@ export default defineNuxtConfig({
       link: [{ rel: 'icon', type: 'image/svg+xml', href: '/favicon.svg' }],
     },
   },
-  nitro: {
-    output: { dir: process.env.SHELFSTEAD_OUTPUT_DIR || '.output' },
-  },
+  css: ['~/assets/css/main.css'],
   runtimeConfig: {
     dataDir: '',
     databaseUrl: '',
     demo: '',
     session: { maxAge: 60 * 60 * 24 * 14 },
   },
+  nitro: {
+    output: { dir: process.env.SHELFSTEAD_OUTPUT_DIR || '.output' },
+  },
+  typescript: { strict: true },
+  telemetry: false,
   hooks: {
     // `nuxt build` does not carry the SQL migrations into .output: copy them beside the server.
     'nitro:init'(nitro) {
@@ -46,4 +44,8 @@ export default defineNuxtConfig({
       })
     },
   },
+  // The linter's flat config is generated into .nuxt/ (eslint.config.mjs extends it).
+  eslint: { config: { stylistic: true } },
+  // main.css holds the @tailwind directives; stop the module from injecting a second copy.
+  tailwindcss: { cssPath: false },
 })

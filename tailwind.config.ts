@@ -53,17 +53,17 @@ export default {
       },
       // Semantic type scale: readable at arm's length; quantities large, labels small.
       fontSize: {
-        label: ['0.9375rem', { lineHeight: '1.3rem', letterSpacing: '0.01em' }],
-        body: ['1.125rem', { lineHeight: '1.7rem' }],
-        lead: ['1.25rem', { lineHeight: '1.85rem' }],
-        heading: ['1.375rem', { lineHeight: '1.8rem', fontWeight: '700' }],
-        title: ['1.875rem', { lineHeight: '2.3rem', fontWeight: '700' }],
-        figure: ['2.25rem', { lineHeight: '2.5rem', fontWeight: '700' }],
+        'label': ['0.9375rem', { lineHeight: '1.3rem', letterSpacing: '0.01em' }],
+        'body': ['1.125rem', { lineHeight: '1.7rem' }],
+        'lead': ['1.25rem', { lineHeight: '1.85rem' }],
+        'heading': ['1.375rem', { lineHeight: '1.8rem', fontWeight: '700' }],
+        'title': ['1.875rem', { lineHeight: '2.3rem', fontWeight: '700' }],
+        'figure': ['2.25rem', { lineHeight: '2.5rem', fontWeight: '700' }],
         'figure-lg': ['3rem', { lineHeight: '3.25rem', fontWeight: '700' }],
       },
       spacing: {
         // WCAG 2.5.5 target size: every control is at least 44 x 44 CSS px.
-        tap: '2.75rem',
+        'tap': '2.75rem',
         'tap-lg': '3.5rem',
       },
       borderRadius: {

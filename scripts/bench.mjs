@@ -23,7 +23,10 @@ if (!process.argv.includes('--no-build')) {
 }
 
 const port = await new Promise((done) => {
-  const probe = createServer().listen(0, '127.0.0.1', () => { const { port } = probe.address(); probe.close(() => done(port)) })
+  const probe = createServer().listen(0, '127.0.0.1', () => {
+    const { port } = probe.address()
+    probe.close(() => done(port))
+  })
 })
 const base = `http://127.0.0.1:${port}`
 const server = spawn(process.execPath, [join(output, 'server/index.mjs')], {
@@ -32,7 +35,8 @@ const server = spawn(process.execPath, [join(output, 'server/index.mjs')], {
 })
 try {
   for (let i = 0; i < 300; i++) {
-    try { if ((await fetch(`${base}/api/health`)).status === 200) break } catch {}
+    try { if ((await fetch(`${base}/api/health`)).status === 200) break }
+    catch { /* not listening yet */ }
     await new Promise(r => setTimeout(r, 200))
   }
   const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'canner@demo.shelfstead.test', password: 'put-up-2026' }) })
@@ -47,7 +51,7 @@ try {
       { recipeId: 'usda-dried-beans-hot-pack', jarSizeId: 'quart-regular', ingredientId: 'pinto-beans', packages: [{ grams: 907.18474, count: 3 }] },
     ],
   })
-  const run = (opts) => autocannon({ connections: 10, duration: 10, ...opts })
+  const run = opts => autocannon({ connections: 10, duration: 10, ...opts })
   const preview = await run({ url: `${base}/api/households/${householdId}/plans/preview`, method: 'POST', headers: { cookie, 'content-type': 'application/json' }, body })
   const health = await run({ url: `${base}/api/health` })
   const row = (name, r) => `${name.padEnd(8)} ${r.requests.average.toFixed(0).padStart(7)} req/s   p50 ${String(r.latency.p50).padStart(4)} ms   p99 ${String(r.latency.p99).padStart(4)} ms   non-2xx ${r.non2xx}`

@@ -7,9 +7,13 @@ import { mkdirSync, readFileSync } from 'node:fs'
 const env = { ...process.env, NUXT_TELEMETRY_DISABLED: '1' }
 const run = (cmd, args) => spawnSync(cmd, args, { stdio: 'inherit', env })
 
+// The linter and the type checker count as one check each: a failure is a failed test.
+const checks = [['npx', ['eslint', '.']], ['npx', ['nuxt', 'typecheck']]].map(([cmd, args]) => run(cmd, args).status === 0)
+const checksFailed = checks.filter(ok => !ok).length
+
 const build = run('npx', ['nuxt', 'build'])
 if (build.status !== 0) {
-  console.log('0 passed, 1 failed')
+  console.log(`0 passed, ${1 + checksFailed} failed`)
   process.exit(1)
 }
 
@@ -32,5 +36,7 @@ catch {
   failed = 1
 }
 if (tests.status !== 0 && failed === 0) failed = 1
+passed += checks.length - checksFailed
+failed += checksFailed
 console.log(`${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}`)
 process.exit(failed > 0 || tests.status !== 0 ? 1 : 0)

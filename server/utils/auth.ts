@@ -1,3 +1,6 @@
+// The app type check reaches this file through the inferred route types, and the app project
+// excludes server/: the reference brings the session user declaration along.
+// eslint-disable-next-line @typescript-eslint/triple-slash-reference
 /// <reference path="../types/auth.d.ts" />
 import type { H3Event } from 'h3'
 import { and, eq } from 'drizzle-orm'

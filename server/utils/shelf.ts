@@ -213,4 +213,3 @@ export async function labelLots(db: Database, householdId: string, lotIds: strin
   const chosen = lotIds ? lots.filter(l => lotIds.includes(l.id)) : lots
   return chosen.map(l => ({ id: l.id, product: l.product, jarSizeName: l.jarSizeName, cannedOn: l.cannedOn, bestBy: l.bestBy, loadCode: l.loadCode, jars: l.jarsLeft }))
 }
-

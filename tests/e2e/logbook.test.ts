@@ -277,7 +277,7 @@ describe('the Shelf', () => {
       `"Black beans, quarts",,quart-regular,4,${monthsFromToday(-12, 28)},${monthsFromToday(0, 28)},2025-B`,
       `Navy bean soup,usda-bean-soup,quart-regular,5,${monthsFromToday(-2)},,`,
     ].join('\n')
-    const res = await fetch(server.url + api('/shelf/import'), { method: 'POST', headers: { 'content-type': 'text/csv', cookie: await cookieFor('tamsin@example.org', 'split-peas-2026') }, body: csv })
+    const res = await fetch(server.url + api('/shelf/import'), { method: 'POST', headers: { 'content-type': 'text/csv', 'cookie': await cookieFor('tamsin@example.org', 'split-peas-2026') }, body: csv })
     expect(res.status).toBe(201)
     expect(await res.json()).toMatchObject({ imported: 3, jars: 12 })
     const shelf = (await owner.get(api('/shelf'))).body

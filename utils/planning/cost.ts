@@ -29,7 +29,7 @@ export interface CostSummary {
    */
   savingPerYear: number | null
   shoppingTotal: number
-  breakdown: { goods: number; salt: number; lids: number; vinegar: number; jars: number }
+  breakdown: { goods: number, salt: number, lids: number, vinegar: number, jars: number }
   /** True when some price was missing and its cost is left out. */
   incomplete: boolean
 }
@@ -54,33 +54,33 @@ export function costSummary(
   jarSizes: readonly JarSize[],
 ): CostSummary {
   const prices = household.prices
-  let incomplete = shopping.some((s) => s.cost === null)
+  let incomplete = shopping.some(s => s.cost === null)
   /** Cheapest price per gram, mL or piece; a missing price counts 0 and marks the sum incomplete. */
   const rate = (options: readonly PackageOption[]): number => {
-    const rates = options.map((o) => o.priceCents / o.size)
+    const rates = options.map(o => o.priceCents / o.size)
     if (rates.length === 0) incomplete = true
     return rates.length ? Math.min(...rates) : 0
   }
 
   let goods = 0
   for (const [ingredientId, grams] of input.gramsUsed) {
-    const bought = shopping.find((s) => s.kind === 'ingredient' && s.ref === ingredientId && s.cost !== null)
+    const bought = shopping.find(s => s.kind === 'ingredient' && s.ref === ingredientId && s.cost !== null)
     const boughtSize = bought ? bought.quantity + bought.leftover : 0
-    const perGram =
-      bought && boughtSize > 0
+    const perGram
+      = bought && boughtSize > 0
         ? bought.cost! / boughtSize
-        : rate(optionsOf(prices, 'ingredient', (p) => p.packageGrams, (p) => p.ingredientId === ingredientId))
+        : rate(optionsOf(prices, 'ingredient', p => p.packageGrams, p => p.ingredientId === ingredientId))
     goods += grams * perGram
   }
-  const salt = input.saltGrams > 0 ? input.saltGrams * rate(optionsOf(prices, 'salt', (p) => p.packageGrams)) : 0
-  const vinegar = input.vinegarMl > 0 ? input.vinegarMl * rate(optionsOf(prices, 'vinegar', (p) => p.packageMl)) : 0
+  const salt = input.saltGrams > 0 ? input.saltGrams * rate(optionsOf(prices, 'salt', p => p.packageGrams)) : 0
+  const vinegar = input.vinegarMl > 0 ? input.vinegarMl * rate(optionsOf(prices, 'vinegar', p => p.packageMl)) : 0
   let lids = 0
   for (const [jarSizeId, jars] of input.jarsBySize) {
-    lids += jars * rate(lidOptions(prices, jarSizes.find((j) => j.id === jarSizeId), jarSizeId).options)
+    lids += jars * rate(lidOptions(prices, jarSizes.find(j => j.id === jarSizeId), jarSizeId).options)
   }
-  const jarsAmortised =
-    shopping
-      .filter((s) => s.kind === 'jar' && s.cost !== null && s.quantity + s.leftover > 0)
+  const jarsAmortised
+    = shopping
+      .filter(s => s.kind === 'jar' && s.cost !== null && s.quantity + s.leftover > 0)
       .reduce((sum, s) => sum + (s.cost! * s.quantity) / (s.quantity + s.leftover), 0) / household.jarUses
 
   const exact = goods + salt + vinegar + lids + jarsAmortised

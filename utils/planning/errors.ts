@@ -42,7 +42,7 @@ export function requireNumber(
   value: number,
   field: string,
   what: string,
-  limits: { min?: number; max?: number; integer?: boolean; above?: boolean } = {},
+  limits: { min?: number, max?: number, integer?: boolean, above?: boolean } = {},
 ): number {
   const { min = 0, max = Infinity, integer = false, above = false } = limits
   if (typeof value !== 'number' || !Number.isFinite(value)) {

@@ -51,17 +51,17 @@ export interface PerJarFill {
 
 /** Look a value up by jar key; a missing size is scaled by capacity from the nearest larger one. */
 function byJarKey(
-  entries: ReadonlyArray<{ jarKey: string; value: number }>,
+  entries: ReadonlyArray<{ jarKey: string, value: number }>,
   jar: JarSize,
   jarSizes: readonly JarSize[],
-): { value: number; fromKey: string } | null {
-  const own = entries.find((e) => e.jarKey === jar.key)
+): { value: number, fromKey: string } | null {
+  const own = entries.find(e => e.jarKey === jar.key)
   if (own) return { value: own.value, fromKey: jar.key }
   const sized = entries
-    .map((e) => ({ e, size: jarSizes.find((j) => j.key === e.jarKey) }))
-    .filter((x): x is { e: { jarKey: string; value: number }; size: JarSize } => x.size !== undefined)
+    .map(e => ({ e, size: jarSizes.find(j => j.key === e.jarKey) }))
+    .filter((x): x is { e: { jarKey: string, value: number }, size: JarSize } => x.size !== undefined)
     .sort((a, b) => a.size.capacityMl - b.size.capacityMl)
-  const base = sized.find((x) => x.size.capacityMl >= jar.capacityMl) ?? sized[sized.length - 1]
+  const base = sized.find(x => x.size.capacityMl >= jar.capacityMl) ?? sized[sized.length - 1]
   if (!base) return null
   return { value: (base.e.value * jar.capacityMl) / base.size.capacityMl, fromKey: base.e.jarKey }
 }
@@ -87,7 +87,7 @@ export function perJarFill(
   jar: JarSize,
   ingredient: Ingredient,
   jarSizes: readonly JarSize[],
-  request: { dryMlPerJar?: number; saltTsp?: number },
+  request: { dryMlPerJar?: number, saltTsp?: number },
   field: string,
 ): PerJarFill {
   const warnings: PlanWarning[] = []
@@ -102,17 +102,18 @@ export function perJarFill(
       }
       if (asked > capMl * (1 + CAP_EPSILON)) {
         throw new PlanningRefusal(
-          `${formatDry(asked, gramsForMl(asked, ingredient), 'us')} of dry ${ingredient.name} per ${jar.name} ` +
-            `is more than the safe fill of ${formatDry(capMl, gramsForMl(capMl, ingredient), 'us')} ` +
-            `(${Math.round(capMl)} mL). Beans swell about ${ingredient.expansionRatio}×; use the cap or less.`,
+          `${formatDry(asked, gramsForMl(asked, ingredient), 'us')} of dry ${ingredient.name} per ${jar.name} `
+          + `is more than the safe fill of ${formatDry(capMl, gramsForMl(capMl, ingredient), 'us')} `
+          + `(${Math.round(capMl)} mL). Beans swell about ${ingredient.expansionRatio}×; use the cap or less.`,
           `${field}.dryMlPerJar`,
         )
       }
       dryMl = asked
     }
-  } else {
+  }
+  else {
     const found = byJarKey(
-      recipe.perJar.flatMap((p) => (p.dryGrams === undefined ? [] : [{ jarKey: p.jarKey, value: p.dryGrams }])),
+      recipe.perJar.flatMap(p => (p.dryGrams === undefined ? [] : [{ jarKey: p.jarKey, value: p.dryGrams }])),
       jar,
       jarSizes,
     )
@@ -137,9 +138,9 @@ export function perJarFill(
       warnings.push(
         info(
           'published-amount-above-cap',
-          `The published ${Math.round(found.value)} g of dry ${ingredient.name} per ${jar.name} is a buying average for ` +
-            `soaked, pre-cooked beans. Fill jars with hot beans and liquid to the headspace line as the recipe says; ` +
-            `some beans may be left over.`,
+          `The published ${Math.round(found.value)} g of dry ${ingredient.name} per ${jar.name} is a buying average for `
+          + `soaked, pre-cooked beans. Fill jars with hot beans and liquid to the headspace line as the recipe says; `
+          + `some beans may be left over.`,
           field,
         ),
       )
@@ -147,14 +148,14 @@ export function perJarFill(
   }
 
   const recipeSalt = byJarKey(
-    recipe.perJar.flatMap((p) => (p.saltTsp === undefined ? [] : [{ jarKey: p.jarKey, value: p.saltTsp }])),
+    recipe.perJar.flatMap(p => (p.saltTsp === undefined ? [] : [{ jarKey: p.jarKey, value: p.saltTsp }])),
     jar,
     jarSizes,
   )
   const saltTsp = request.saltTsp ?? recipeSalt?.value ?? 0
   const toLine = volumeToHeadspaceMl(jar, recipe.headspaceMm)
-  const solidsMl =
-    recipe.packStyle === 'dry'
+  const solidsMl
+    = recipe.packStyle === 'dry'
       ? dryMl
       : Math.min(dryMl * ingredient.expansionRatio, recipe.solidsFillFraction * jar.capacityMl, toLine)
   return {

@@ -33,12 +33,12 @@ export interface PlannedLine {
 /** Why a jar does not fit a canner, or null when at least one jar fits. */
 function misfit(c: Canner, jar: JarSize, fit: CannerLayout, clearanceMm: number): string | null {
   if (fit.layers === 0) {
-    return `${jar.name} jars (${Math.round(jar.heightMm)} mm tall) are taller than the usable height of ${c.name} ` +
-      `(${Math.round(c.usableHeightMm)} mm)`
+    return `${jar.name} jars (${Math.round(jar.heightMm)} mm tall) are taller than the usable height of ${c.name} `
+      + `(${Math.round(c.usableHeightMm)} mm)`
   }
   if (fit.perLayer === 0) {
-    return `${c.name} (${Math.round(c.innerDiameterMm)} mm across) cannot hold one ${jar.name} jar ` +
-      `(${Math.round(jar.outsideDiameterMm)} mm across plus ${clearanceMm} mm clearance)`
+    return `${c.name} (${Math.round(c.innerDiameterMm)} mm across) cannot hold one ${jar.name} jar `
+      + `(${Math.round(jar.outsideDiameterMm)} mm across plus ${clearanceMm} mm clearance)`
   }
   return null
 }
@@ -52,11 +52,11 @@ function misfit(c: Canner, jar: JarSize, fit: CannerLayout, clearanceMm: number)
 export function planLine(line: PlanLineRequest, i: number, ctx: LineContext): PlannedLine {
   const field = `lines[${i}]`
   const { catalogue, system } = ctx
-  const recipe = catalogue.recipes.find((r) => r.id === line.recipeId)
+  const recipe = catalogue.recipes.find(r => r.id === line.recipeId)
   if (!recipe) throw new PlanningRefusal('Choose a recipe from the recipe book.', `${field}.recipeId`)
-  const jar = catalogue.jarSizes.find((j) => j.id === line.jarSizeId)
+  const jar = catalogue.jarSizes.find(j => j.id === line.jarSizeId)
   if (!jar) throw new PlanningRefusal('Choose a jar size from the catalogue.', `${field}.jarSizeId`)
-  const ingredient = catalogue.ingredients.find((g) => g.id === recipe.ingredientId)
+  const ingredient = catalogue.ingredients.find(g => g.id === recipe.ingredientId)
   if (!ingredient) {
     throw new PlanningRefusal(`${recipe.name} names an ingredient that is not in the catalogue.`, `${field}.recipeId`)
   }
@@ -67,16 +67,16 @@ export function planLine(line: PlanLineRequest, i: number, ctx: LineContext): Pl
 
   const process = processMinutesFor(recipe, jar, catalogue.jarSizes, field)
   if (process.borrowed) {
-    warnings.push(info('time-from-larger-jar', `${jar.name} jars of ${recipe.name} use the ${process.fromJarKey} time, ` +
-      `${process.minutes} min (a smaller jar may take the next larger size's time, never the reverse).`, field))
+    warnings.push(info('time-from-larger-jar', `${jar.name} jars of ${recipe.name} use the ${process.fromJarKey} time, `
+    + `${process.minutes} min (a smaller jar may take the next larger size's time, never the reverse).`, field))
   }
   const fill = perJarFill(recipe, jar, ingredient, catalogue.jarSizes, line, field)
   warnings.push(...fill.warnings)
   const amount = jarsForAmount(line.amount, fill.dryGrams, field, jar.name)
   if (amount.suppliedGrams !== null && amount.leftoverGrams > 0.5) {
     const part = Math.round(amount.partJar * 100)
-    warnings.push(info('goods-leftover', `${Math.round(amount.suppliedGrams)} g of ${ingredient.name} fills ${amount.jars} ` +
-      `${jar.name} jars with ${Math.round(amount.leftoverGrams)} g left over (${part} % of a jar).`, field))
+    warnings.push(info('goods-leftover', `${Math.round(amount.suppliedGrams)} g of ${ingredient.name} fills ${amount.jars} `
+    + `${jar.name} jars with ${Math.round(amount.leftoverGrams)} g left over (${part} % of a jar).`, field))
   }
 
   const psiByCanner: Record<string, number> = {}
@@ -90,8 +90,8 @@ export function planLine(line: PlanLineRequest, i: number, ctx: LineContext): Pl
     }
     psiByCanner[c.id] = pressureFor(recipe, c.gaugeType, ctx.feet, 'altitudeFt', c.name)
     if (fit.limitedBy === 'drawing') {
-      warnings.push(info('layer-drawing-limit', `The published packing fits ${fit.tableCount} ${jar.name} jars per layer ` +
-        `in ${c.name}, but we can only draw ${fit.perLayer} without overlap; the plan uses ${fit.perLayer}.`, `canners[${k}]`))
+      warnings.push(info('layer-drawing-limit', `The published packing fits ${fit.tableCount} ${jar.name} jars per layer `
+      + `in ${c.name}, but we can only draw ${fit.perLayer} without overlap; the plan uses ${fit.perLayer}.`, `canners[${k}]`))
     }
   })
   if (misfits.length === ctx.canners.length) {

@@ -100,25 +100,25 @@ export function buildLoads(
 ): Load[] {
   const groups = new Map<string, LoadLine[]>()
   for (const line of lines) {
-    const key = [line.jarSizeId, ...cannerIds.map((id) => line.psiByCanner[id])].join('|')
+    const key = [line.jarSizeId, ...cannerIds.map(id => line.psiByCanner[id])].join('|')
     groups.set(key, [...(groups.get(key) ?? []), line])
   }
-  const freeAt = new Map(cannerIds.map((id) => [id, 0]))
+  const freeAt = new Map(cannerIds.map(id => [id, 0]))
   const loads: Load[] = []
   for (const group of groups.values()) {
     const jarSizeId = group[0]!.jarSizeId
     const total = group.reduce((s, l) => s + l.jars, 0)
-    const longest = Math.max(...group.map((l) => l.processMinutes))
+    const longest = Math.max(...group.map(l => l.processMinutes))
     const usable = cannerIds
       .map((id, order) => ({ fit: fit(id, jarSizeId), order }))
-      .filter((c) => c.fit.perLayer * c.fit.layers > 0)
+      .filter(c => c.fit.perLayer * c.fit.layers > 0)
     const slots: CannerFit[] = []
-    for (let held = 0; held < total; ) {
+    for (let held = 0; held < total;) {
       const next = [...usable].sort(
         (a, b) =>
-          freeAt.get(a.fit.cannerId)! - freeAt.get(b.fit.cannerId)! ||
-          b.fit.perLayer * b.fit.layers - a.fit.perLayer * a.fit.layers ||
-          a.order - b.order,
+          freeAt.get(a.fit.cannerId)! - freeAt.get(b.fit.cannerId)!
+          || b.fit.perLayer * b.fit.layers - a.fit.perLayer * a.fit.layers
+          || a.order - b.order,
       )[0]
       if (!next) throw new Error(`no canner holds jar size ${jarSizeId}`)
       slots.push(next.fit)
@@ -127,22 +127,22 @@ export function buildLoads(
     }
     const sizes = spreadEvenly(
       total,
-      slots.map((s) => s.perLayer * s.layers),
+      slots.map(s => s.perLayer * s.layers),
     )
-    const queue = [...group].sort((a, b) => b.processMinutes - a.processMinutes).map((l) => ({ line: l, left: l.jars }))
+    const queue = [...group].sort((a, b) => b.processMinutes - a.processMinutes).map(l => ({ line: l, left: l.jars }))
     slots.forEach((slot, i) => {
       const size = sizes[i]!
       const contents: LoadContent[] = []
-      for (let room = size; room > 0; ) {
-        const head = queue.find((q) => q.left > 0)!
+      for (let room = size; room > 0;) {
+        const head = queue.find(q => q.left > 0)!
         const take = Math.min(room, head.left)
         head.left -= take
         room -= take
         const { lineIndex, recipeId, processMinutes } = head.line
         contents.push({ lineIndex, recipeId, jars: take, processMinutes })
       }
-      const minutes = Math.max(...contents.map((c) => c.processMinutes))
-      const mixed = new Set(contents.map((c) => c.processMinutes)).size > 1
+      const minutes = Math.max(...contents.map(c => c.processMinutes))
+      const mixed = new Set(contents.map(c => c.processMinutes)).size > 1
       const psi = group[0]!.psiByCanner[slot.cannerId]!
       loads.push({
         index: loads.length + 1,
@@ -156,7 +156,7 @@ export function buildLoads(
         jarsByLayer: byLayer(size, slot.perLayer),
         processMinutes: minutes,
         pressurePsi: psi,
-        recipeIds: [...new Set(contents.map((c) => c.recipeId))],
+        recipeIds: [...new Set(contents.map(c => c.recipeId))],
         contents,
         note: mixed ? `Recipes with different times share this load: timed for the longest, ${minutes} min.` : null,
       })

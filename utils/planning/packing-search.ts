@@ -107,7 +107,8 @@ function relax(p: Float64Array, n: number, k: number, maxIter: number): number {
         dt = Math.min(dt * 1.1, 0.5)
         alpha *= 0.99
       }
-    } else {
+    }
+    else {
       v.fill(0)
       dt *= 0.5
       alpha = 0.1
@@ -133,8 +134,8 @@ export function tighten(points: Point[]): UnitPacking {
     }
   }
   const s = 2 / minD
-  const scaled = points.map((q) => ({ x: q.x * s, y: q.y * s }))
-  const ratio = 1 + Math.max(...scaled.map((q) => Math.hypot(q.x, q.y)))
+  const scaled = points.map(q => ({ x: q.x * s, y: q.y * s }))
+  const ratio = 1 + Math.max(...scaled.map(q => Math.hypot(q.x, q.y)))
   return { n, ratio, points: scaled }
 }
 
@@ -163,7 +164,7 @@ function shrink(start: Point[], budget: number): UnitPacking {
   while (step > 1e-10 && spent < budget) {
     const scale = 1 - step
     const k = 1 + (best.ratio - 1) * scale
-    const q = p.map((c) => c * scale)
+    const q = p.map(c => c * scale)
     const iters = 400 + 40 * n
     spent += iters
     if (relax(q, n, k, iters) <= DONE_ENERGY) {
@@ -173,7 +174,8 @@ function shrink(start: Point[], budget: number): UnitPacking {
         p = toArray(t.points)
       }
       step = Math.min(step * 1.5, 0.05)
-    } else {
+    }
+    else {
       step *= 0.5
     }
   }
@@ -267,11 +269,11 @@ export function formatPackingData(packings: readonly UnitPacking[]): string {
     ' * do not edit by hand. Ratios found (R/r, before re-measuring):',
   ]
   for (let i = 0; i < packings.length; i += 5) {
-    out.push(' *  ' + packings.slice(i, i + 5).map((p) => `${p.n}: ${p.ratio.toFixed(9)}`).join(', '))
+    out.push(' *  ' + packings.slice(i, i + 5).map(p => `${p.n}: ${p.ratio.toFixed(9)}`).join(', '))
   }
   out.push(' */', 'export const PACKING_DATA: ReadonlyArray<readonly number[]> = [')
   for (const p of packings) {
-    const nums = p.points.flatMap((q) => [q.x, q.y]).map((v) => Number(v.toFixed(10)).toString())
+    const nums = p.points.flatMap(q => [q.x, q.y]).map(v => Number(v.toFixed(10)).toString())
     const rows: string[] = []
     for (let i = 0; i < nums.length; i += 8) rows.push('    ' + nums.slice(i, i + 8).join(', ') + ',')
     out.push(`  [ // n = ${p.n}`, ...rows, '  ],')

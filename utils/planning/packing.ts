@@ -101,7 +101,7 @@ export function jarPositions(
   if (packing.ratio > ratio * (1 + DRAW_EPSILON)) return null
   const r = (jarDiameterMm + clearanceMm) / 2
   const spread = packing.ratio > 1 ? (ratio - 1) / (packing.ratio - 1) : 1
-  return packing.points.map((p) => ({ x: p.x * spread * r, y: p.y * spread * r }))
+  return packing.points.map(p => ({ x: p.x * spread * r, y: p.y * spread * r }))
 }
 
 export interface LayerLayout {
@@ -152,7 +152,7 @@ export function layersFor(usableHeightMm: number, rackThicknessMm: number, jarHe
 export function layoutTimings(
   counts: readonly number[] = Array.from({ length: MAX_JARS_PER_LAYER }, (_, i) => i + 1),
   repeats = 200,
-): Array<{ n: number; perLayer: number; microseconds: number }> {
+): Array<{ n: number, perLayer: number, microseconds: number }> {
   const jar = 76
   const c = DEFAULT_CLEARANCE_MM
   drawnPackings()

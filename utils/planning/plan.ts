@@ -70,7 +70,7 @@ export function planBatch(
 
   const context = { catalogue, canners, feet: altitude.feet, clearanceMm, system, fit }
   const planned = request.lines.map((line, i) => planLine(line, i, context))
-  const lines = planned.map((p) => p.result)
+  const lines = planned.map(p => p.result)
   const totalJars = lines.reduce((s, l) => s + l.jars, 0)
   if (totalJars > MAX_JARS_PER_PLAN) {
     throw new PlanningRefusal(
@@ -79,40 +79,40 @@ export function planBatch(
     )
   }
 
-  const jarOf = (id: string): JarSize => catalogue.jarSizes.find((j) => j.id === id)!
-  const cannerOf = (id: string): Canner => canners.find((c) => c.id === id)!
+  const jarOf = (id: string): JarSize => catalogue.jarSizes.find(j => j.id === id)!
+  const cannerOf = (id: string): Canner => canners.find(c => c.id === id)!
   const cool = (jarSizeId: string): number => coolDownMinutes(jarOf(jarSizeId).capacityMl, household.coolDownMinutes)
   const loads: LoadResult[] = buildLoads(
-    planned.map((p) => p.load),
-    canners.map((c) => c.id),
+    planned.map(p => p.load),
+    canners.map(c => c.id),
     (cannerId, jarSizeId) => fit(cannerOf(cannerId), jarOf(jarSizeId)),
     (jarSizeId, minutes) => loadMinutes(minutes, cool(jarSizeId), steps),
-  ).map((load) => ({ ...load, gaugeType: cannerOf(load.cannerId).gaugeType, coolMinutes: cool(load.jarSizeId) }))
-  const layouts = [...new Set(loads.map((l) => `${l.cannerId}|${l.jarSizeId}`))].map((key) => fits.get(key)!)
+  ).map(load => ({ ...load, gaugeType: cannerOf(load.cannerId).gaugeType, coolMinutes: cool(load.jarSizeId) }))
+  const layouts = [...new Set(loads.map(l => `${l.cannerId}|${l.jarSizeId}`))].map(key => fits.get(key)!)
   const schedule = buildSchedule(loads, start, steps)
 
   const ingredientOf = (l: LineResult): string => planned[l.lineIndex]!.recipe.ingredientId
-  const jarsBySize = sumBy(lines, (l) => l.jarSizeId, (l) => l.jars)
+  const jarsBySize = sumBy(lines, l => l.jarSizeId, l => l.jars)
   const saltGrams = lines.reduce((s, l) => s + l.saltGramsTotal, 0)
   const vinegarMl = totalJars * (options.vinegarMlPerJar ?? DEFAULT_VINEGAR_ML_PER_JAR)
-  const buying = lines.filter((l) => l.suppliedGrams === null)
+  const buying = lines.filter(l => l.suppliedGrams === null)
   const shopping = buildShopping(
-    { ingredientGrams: sumBy(buying, ingredientOf, (l) => l.dryGramsTotal), saltGrams, jarsBySize, vinegarMl },
+    { ingredientGrams: sumBy(buying, ingredientOf, l => l.dryGramsTotal), saltGrams, jarsBySize, vinegarMl },
     household,
     catalogue.ingredients,
     catalogue.jarSizes,
     system,
   )
   for (const item of shopping.items) {
-    const last = buying.filter((l) => item.kind === 'ingredient' && ingredientOf(l) === item.ref).pop()
+    const last = buying.filter(l => item.kind === 'ingredient' && ingredientOf(l) === item.ref).pop()
     if (last) last.leftoverGrams = item.leftover
   }
 
-  const eaten = planned.flatMap((p) => (p.load.jarsPerMonth === null ? [] : [p.load.jarsPerMonth]))
+  const eaten = planned.flatMap(p => (p.load.jarsPerMonth === null ? [] : [p.load.jarsPerMonth]))
   const cost = costSummary(
     {
       jars: totalJars,
-      gramsUsed: sumBy(lines, ingredientOf, (l) => l.dryGramsTotal),
+      gramsUsed: sumBy(lines, ingredientOf, l => l.dryGramsTotal),
       saltGrams,
       vinegarMl,
       jarsBySize,
@@ -123,16 +123,16 @@ export function planBatch(
     catalogue.jarSizes,
   )
 
-  const recipes = [...new Set(planned.map((p) => p.recipe))]
+  const recipes = [...new Set(planned.map(p => p.recipe))]
   const warnings: PlanWarning[] = [
     ...altitude.warnings,
-    ...planned.flatMap((p) => p.warnings),
-    ...loads.flatMap((l) => (l.note ? [info('mixed-load', `Load ${l.index}: ${l.note}`)] : [])),
+    ...planned.flatMap(p => p.warnings),
+    ...loads.flatMap(l => (l.note ? [info('mixed-load', `Load ${l.index}: ${l.note}`)] : [])),
     ...shopping.warnings,
     ...standingWarnings({ recipes, canners, loads, jarSizes: catalogue.jarSizes, feet: altitude.feet, today, system }),
   ]
   const kettleMl = lines.reduce((s, l) => s + l.waterMlTotal, 0)
-  const cannersUsed = canners.filter((c) => loads.some((l) => l.cannerId === c.id))
+  const cannersUsed = canners.filter(c => loads.some(l => l.cannerId === c.id))
   return {
     lines,
     loads,
@@ -156,6 +156,6 @@ export function planBatch(
       saltGrams,
     },
     altitudeFt: altitude.feet,
-    warnings: [...warnings.filter((w) => w.level === 'caution'), ...warnings.filter((w) => w.level !== 'caution')],
+    warnings: [...warnings.filter(w => w.level === 'caution'), ...warnings.filter(w => w.level !== 'caution')],
   }
 }

@@ -25,22 +25,22 @@ export function processMinutesFor(
   jarSizes: readonly JarSize[],
   field: string,
 ): ProcessTimeResult {
-  const own = recipe.processMinutes.find((p) => p.jarKey === jar.key)
+  const own = recipe.processMinutes.find(p => p.jarKey === jar.key)
   if (own) return { minutes: own.minutes, fromJarKey: jar.key, borrowed: false }
   const listed = recipe.processMinutes
-    .map((p) => ({ p, size: jarSizes.find((j) => j.key === p.jarKey) }))
-    .filter((x): x is { p: (typeof recipe.processMinutes)[number]; size: JarSize } => x.size !== undefined)
+    .map(p => ({ p, size: jarSizes.find(j => j.key === p.jarKey) }))
+    .filter((x): x is { p: (typeof recipe.processMinutes)[number], size: JarSize } => x.size !== undefined)
     .sort((a, b) => a.size.capacityMl - b.size.capacityMl)
-  const larger = listed.find((x) => x.size.capacityMl >= jar.capacityMl)
+  const larger = listed.find(x => x.size.capacityMl >= jar.capacityMl)
   if (larger) return { minutes: larger.p.minutes, fromJarKey: larger.p.jarKey, borrowed: true }
   const largest = listed[listed.length - 1]
   if (!largest) {
     throw new PlanningRefusal(`${recipe.name} has no process time for any jar size.`, `${field}.recipeId`)
   }
   throw new PlanningRefusal(
-    `There is no tested process time for ${jar.name} jars of ${recipe.name}. Published times stop at ` +
-      `${largest.size.name} jars, and a process time "cannot be extended by any formula" to a larger jar ` +
-      `(Penn State Extension; NCHFP). Choose ${largest.size.name} jars or smaller.`,
+    `There is no tested process time for ${jar.name} jars of ${recipe.name}. Published times stop at `
+    + `${largest.size.name} jars, and a process time "cannot be extended by any formula" to a larger jar `
+    + `(Penn State Extension; NCHFP). Choose ${largest.size.name} jars or smaller.`,
     `${field}.jarSizeId`,
   )
 }
@@ -54,7 +54,7 @@ const LOWEST_ALTITUDE_FT = -1500
  * the 0-ft band applies: the air pressure is higher there, so the sea-level setting gives at least
  * the published temperature.
  */
-export function bandAltitude(altitudeFt: number, field: string): { feet: number; warnings: PlanWarning[] } {
+export function bandAltitude(altitudeFt: number, field: string): { feet: number, warnings: PlanWarning[] } {
   if (typeof altitudeFt !== 'number' || !Number.isFinite(altitudeFt)) {
     throw new PlanningRefusal('Enter the altitude of your kitchen in feet.', field)
   }
@@ -75,30 +75,30 @@ export function bandAltitude(altitudeFt: number, field: string): { feet: number;
  * dial band (8,000 ft in the USDA tables) there is no published value to fall back on.
  */
 export function pressureFor(recipe: Recipe, gaugeType: GaugeType, feet: number, field: string, cannerName?: string): number {
-  const bands = recipe.pressureBands.filter((b) => b.gaugeType === gaugeType)
-  const band = bands.find((b) => b.minFt <= feet && feet <= b.maxFt)
+  const bands = recipe.pressureBands.filter(b => b.gaugeType === gaugeType)
+  const band = bands.find(b => b.minFt <= feet && feet <= b.maxFt)
   if (band) return band.psi
-  const top = Math.max(...bands.map((b) => b.maxFt))
+  const top = Math.max(...bands.map(b => b.maxFt))
   if (bands.length > 0 && feet > top) {
     throw new PlanningRefusal(
-      `No published ${gaugeType}-gauge pressure above ${top.toLocaleString('en-US')} ft for ${recipe.name} ` +
-        `(your altitude: ${feet.toLocaleString('en-US')} ft). ` +
-        (gaugeType === 'dial' ? 'Use a weighted-gauge canner if its table covers your altitude, or ' : '') +
-        'consult your local extension office before canning.' +
-        (cannerName ? ` (Canner: ${cannerName}.)` : ''),
+      `No published ${gaugeType}-gauge pressure above ${top.toLocaleString('en-US')} ft for ${recipe.name} `
+      + `(your altitude: ${feet.toLocaleString('en-US')} ft). `
+      + (gaugeType === 'dial' ? 'Use a weighted-gauge canner if its table covers your altitude, or ' : '')
+      + 'consult your local extension office before canning.'
+      + (cannerName ? ` (Canner: ${cannerName}.)` : ''),
       field,
     )
   }
   throw new PlanningRefusal(
-    `${recipe.name} gives no ${gaugeType}-gauge pressure for ${feet.toLocaleString('en-US')} ft; ` +
-      'consult your local extension office before canning.',
+    `${recipe.name} gives no ${gaugeType}-gauge pressure for ${feet.toLocaleString('en-US')} ft; `
+    + 'consult your local extension office before canning.',
     field,
   )
 }
 
 /** The pressure at the lowest band for this gauge type (the sea-level setting). */
 export function seaLevelPsi(recipe: Recipe, gaugeType: GaugeType): number | undefined {
-  const bands = recipe.pressureBands.filter((b) => b.gaugeType === gaugeType)
+  const bands = recipe.pressureBands.filter(b => b.gaugeType === gaugeType)
   return bands.sort((a, b) => a.minFt - b.minFt)[0]?.psi
 }
 
@@ -126,8 +126,8 @@ export function gaugeTestWarning(canner: Canner, today: string, field: string): 
   const when = days === null ? 'has no recorded accuracy test' : `was last tested ${canner.lastGaugeTestAt}`
   return caution(
     'gauge-test-due',
-    `The dial gauge of ${canner.name} ${when}. Have it tested before canning (yearly; replace it if it ` +
-      'reads more than 2 psi off). Local extension offices often test gauges.',
+    `The dial gauge of ${canner.name} ${when}. Have it tested before canning (yearly; replace it if it `
+    + 'reads more than 2 psi off). Local extension offices often test gauges.',
     field,
   )
 }

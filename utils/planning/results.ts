@@ -87,9 +87,9 @@ export interface PlanResult {
     kettleMl: number
     kettleDisplay: string
     /** Water to put in each canner for each load: its depth over its floor. */
-    canners: Array<{ cannerId: string; mlPerLoad: number; display: string }>
+    canners: Array<{ cannerId: string, mlPerLoad: number, display: string }>
   }
-  totals: { jars: number; loads: number; dryGrams: number; saltGrams: number }
+  totals: { jars: number, loads: number, dryGrams: number, saltGrams: number }
   /** The altitude used for the pressure bands, in whole feet. */
   altitudeFt: number
   /** Cautions first, then information. */

@@ -63,7 +63,8 @@ export function jarsForAmount(amount: LineAmount, perJarGrams: number, field: st
       let grams: number
       if (amount.mode === 'dryGrams') {
         grams = requireNumber(amount.grams, `${f}.grams`, 'The dry weight', { min: 0, above: true })
-      } else {
+      }
+      else {
         if (!Array.isArray(amount.packages) || amount.packages.length === 0) {
           throw new PlanningRefusal('List at least one package of dry goods.', `${f}.packages`)
         }
@@ -91,8 +92,8 @@ export function jarsForAmount(amount: LineAmount, perJarGrams: number, field: st
       const jars = jarsFromConsumption(amount.jarsPerMonth, amount.months, onShelf)
       if (jars === 0) {
         throw new PlanningRefusal(
-          `The ${onShelf} jars on the shelf already cover ${amount.jarsPerMonth} a month for ${amount.months} months: ` +
-            'nothing to can.',
+          `The ${onShelf} jars on the shelf already cover ${amount.jarsPerMonth} a month for ${amount.months} months: `
+          + 'nothing to can.',
           f,
         )
       }

@@ -40,7 +40,7 @@ export const STEP_LABELS: Readonly<Record<StepName, string>> = {
 }
 
 /** Natural cool-down for a jar size: the pint figure up to a pint, the quart figure above. */
-export function coolDownMinutes(jarCapacityMl: number, cool: { pint: number; quart: number } = DEFAULT_COOL_DOWN): number {
+export function coolDownMinutes(jarCapacityMl: number, cool: { pint: number, quart: number } = DEFAULT_COOL_DOWN): number {
   return jarCapacityMl <= (ML_PER_QUART / 2) * 1.001 ? cool.pint : cool.quart
 }
 
@@ -49,7 +49,7 @@ export function loadSteps(
   processMinutes: number,
   coolMinutes: number,
   steps: StepMinutes,
-): Array<{ step: StepName; minutes: number }> {
+): Array<{ step: StepName, minutes: number }> {
   return [
     { step: 'heat', minutes: steps.heat },
     { step: 'vent', minutes: steps.vent },
@@ -116,7 +116,7 @@ export interface Schedule {
 
 /** Lay out the loads' steps: each canner runs its loads in index order, back to back. */
 export function buildSchedule(
-  loads: ReadonlyArray<{ index: number; cannerId: string; processMinutes: number; coolMinutes: number }>,
+  loads: ReadonlyArray<{ index: number, cannerId: string, processMinutes: number, coolMinutes: number }>,
   start: DayStart,
   steps: StepMinutes,
 ): Schedule {

@@ -36,7 +36,7 @@ export function cheapestCombination(need: number, options: readonly PackageOptio
   const onGrid = (x: number): number => Math.floor(x / step + 1e-7)
   const usable = options
     .map((o, i) => ({ ...o, i, units: onGrid(o.size) }))
-    .filter((o) => o.units >= 1 && Number.isFinite(o.priceCents) && o.priceCents >= 0)
+    .filter(o => o.units >= 1 && Number.isFinite(o.priceCents) && o.priceCents >= 0)
   if (usable.length === 0) return null
   const counts = options.map(() => 0)
   if (!(need > 0)) return { counts, totalSize: 0, totalCents: 0, packages: 0 }
@@ -62,7 +62,7 @@ export function cheapestCombination(need: number, options: readonly PackageOptio
     }
     choice[g] = best
   }
-  for (let g = units; g > 0; ) {
+  for (let g = units; g > 0;) {
     const o = usable[choice[g]!]!
     counts[o.i] = counts[o.i]! + 1
     g = Math.max(0, g - o.units)
@@ -145,12 +145,12 @@ export function optionsOf<K extends PriceItem['kind']>(
  * the lids are listed per jar size), else packs priced for its mouth size (pooled by mouth).
  */
 export function lidOptions(prices: readonly PriceItem[], jar: JarSize | undefined, jarSizeId: string) {
-  const own = optionsOf(prices, 'lid', (p) => p.packCount, (p) => p.jarSizeId === jarSizeId)
+  const own = optionsOf(prices, 'lid', p => p.packCount, p => p.jarSizeId === jarSizeId)
   if (own.length) {
     return { key: `size:${jarSizeId}`, ref: jarSizeId, options: own, name: `Lids for ${jar?.name ?? jarSizeId} jars` }
   }
   const mouth = jar?.mouth ?? 'regular'
-  const pooled = optionsOf(prices, 'lid', (p) => p.packCount, (p) => p.jarSizeId === undefined && p.jarMouth === mouth)
+  const pooled = optionsOf(prices, 'lid', p => p.packCount, p => p.jarSizeId === undefined && p.jarMouth === mouth)
   return { key: `mouth:${mouth}`, ref: mouth, options: pooled, name: `Lids, ${mouth} mouth` }
 }
 
@@ -169,7 +169,7 @@ export function buildShopping(
   ingredients: readonly Ingredient[],
   jarSizes: readonly JarSize[],
   system: UnitSystem,
-): { items: ShoppingItem[]; warnings: PlanWarning[] } {
+): { items: ShoppingItem[], warnings: PlanWarning[] } {
   const prices = household.prices
   const items: ShoppingItem[] = []
   const missing: string[] = []
@@ -178,8 +178,8 @@ export function buildShopping(
 
   for (const [ingredientId, grams] of needs.ingredientGrams) {
     if (grams <= 0) continue
-    const name = ingredients.find((i) => i.id === ingredientId)?.name ?? ingredientId
-    const options = optionsOf(prices, 'ingredient', (p) => p.packageGrams, (p) => p.ingredientId === ingredientId)
+    const name = ingredients.find(i => i.id === ingredientId)?.name ?? ingredientId
+    const options = optionsOf(prices, 'ingredient', p => p.packageGrams, p => p.ingredientId === ingredientId)
     const base = {
       kind: 'ingredient' as const, item: name, quantity: grams, unit: 'g' as const, display: mass(grams), ref: ingredientId,
     }
@@ -190,13 +190,13 @@ export function buildShopping(
       kind: 'salt' as const, item: 'Canning salt', quantity: needs.saltGrams, unit: 'g' as const,
       display: mass(needs.saltGrams), note: atHome,
     }
-    items.push(priced(base, optionsOf(prices, 'salt', (p) => p.packageGrams), mass, missing))
+    items.push(priced(base, optionsOf(prices, 'salt', p => p.packageGrams), mass, missing))
   }
 
   const lids = new Map<string, { count: number } & ReturnType<typeof lidOptions>>()
   for (const [jarSizeId, jars] of needs.jarsBySize) {
-    const jar = jarSizes.find((j) => j.id === jarSizeId)
-    const owned = household.jarsOwned.filter((o) => o.jarSizeId === jarSizeId).reduce((s, o) => s + o.count, 0)
+    const jar = jarSizes.find(j => j.id === jarSizeId)
+    const owned = household.jarsOwned.filter(o => o.jarSizeId === jarSizeId).reduce((s, o) => s + o.count, 0)
     const buy = Math.max(0, jars - owned)
     let lidsWithJars = 0
     if (buy > 0) {
@@ -204,8 +204,8 @@ export function buildShopping(
         kind: 'jar' as const, item: `${jar?.name ?? jarSizeId} jars`, quantity: buy, unit: 'count' as const,
         display: `${buy} jars`, ref: jarSizeId, note: `You own ${owned}; new jars come with lids and bands.`,
       }
-      const options = optionsOf(prices, 'jar', (p) => p.packCount, (p) => p.jarSizeId === jarSizeId)
-      const bought = priced(base, options, (n) => `case of ${n}`, missing)
+      const options = optionsOf(prices, 'jar', p => p.packCount, p => p.jarSizeId === jarSizeId)
+      const bought = priced(base, options, n => `case of ${n}`, missing)
       items.push(bought)
       lidsWithJars = buy + bought.leftover
     }
@@ -220,7 +220,7 @@ export function buildShopping(
       kind: 'lid' as const, item: lid.name, quantity: lid.count, unit: 'count' as const,
       display: `${lid.count} lids`, ref: lid.ref,
     }
-    items.push(priced(base, lid.options, (n) => `pack of ${n}`, missing))
+    items.push(priced(base, lid.options, n => `pack of ${n}`, missing))
   }
   if (needs.vinegarMl > 0) {
     const volume = (ml: number): string => formatVolume(ml, system)
@@ -228,7 +228,7 @@ export function buildShopping(
       kind: 'vinegar' as const, item: 'White vinegar (for wiping rims)', quantity: needs.vinegarMl, unit: 'mL' as const,
       display: volume(needs.vinegarMl), note: atHome,
     }
-    items.push(priced(base, optionsOf(prices, 'vinegar', (p) => p.packageMl), volume, missing))
+    items.push(priced(base, optionsOf(prices, 'vinegar', p => p.packageMl), volume, missing))
   }
   const warnings = missing.length
     ? [info('no-price', `No price on file for ${missing.join(', ')}; the costs leave them out. Add them on the Household page.`)]

@@ -124,16 +124,16 @@ export interface HouseholdSettings {
   /** Expected uses of one jar, for amortising jars bought for this batch. */
   jarUses: number
   /** Natural cool-down to zero pressure; defaults 30 (pints and smaller) and 45 (larger). */
-  coolDownMinutes?: { pint: number; quart: number }
-  jarsOwned: Array<{ jarSizeId: string; count: number }>
+  coolDownMinutes?: { pint: number, quart: number }
+  jarsOwned: Array<{ jarSizeId: string, count: number }>
   prices: PriceItem[]
 }
 
-export type LineAmount =
-  | { mode: 'jars'; jars: number }
-  | { mode: 'dryGrams'; grams: number }
-  | { mode: 'packages'; packages: Array<{ grams: number; count: number }> }
-  | { mode: 'consumption'; jarsPerMonth: number; months: number; jarsOnShelf?: number }
+export type LineAmount
+  = | { mode: 'jars', jars: number }
+    | { mode: 'dryGrams', grams: number }
+    | { mode: 'packages', packages: Array<{ grams: number, count: number }> }
+    | { mode: 'consumption', jarsPerMonth: number, months: number, jarsOnShelf?: number }
 
 export interface PlanLineRequest {
   recipeId: string

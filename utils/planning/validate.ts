@@ -74,7 +74,8 @@ export function validateHousehold(h: HouseholdSettings): void {
     num(p.priceCents, `${f}.priceCents`, 'A price', { max: 10_000_000 })
     if (p.kind === 'ingredient' || p.kind === 'salt') {
       num(p.packageGrams, `${f}.packageGrams`, 'A package weight', { min: 1, max: 1_000_000 })
-    } else if (p.kind === 'vinegar') num(p.packageMl, `${f}.packageMl`, 'A bottle size', { min: 1, max: 1_000_000 })
+    }
+    else if (p.kind === 'vinegar') num(p.packageMl, `${f}.packageMl`, 'A bottle size', { min: 1, max: 1_000_000 })
     else num(p.packCount, `${f}.packCount`, 'A pack count', { min: 1, max: 10_000, integer: true })
   })
 }
@@ -98,7 +99,7 @@ export function validateRequest(request: PlanRequest): void {
     throw new PlanningRefusal('Choose the canner to use.', 'canners')
   }
   if (request.canners.length > 4) throw new PlanningRefusal('A plan runs at most 4 canners side by side.', 'canners')
-  const ids = new Set(request.canners.map((c) => c.id))
+  const ids = new Set(request.canners.map(c => c.id))
   if (ids.size !== request.canners.length) throw new PlanningRefusal('The same canner is listed twice.', 'canners')
   request.canners.forEach((c, i) => validateCanner(c, `canners[${i}]`))
   request.lines.forEach((l, i) => {

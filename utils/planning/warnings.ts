@@ -21,14 +21,14 @@ export interface StandingInput {
 /** The cautions (and the store-comparison note) that apply to this plan, in a fixed order. */
 export function standingWarnings({ recipes, canners, loads, jarSizes, feet, today, system }: StandingInput): PlanWarning[] {
   const out: PlanWarning[] = []
-  const dry = recipes.filter((r) => r.packStyle === 'dry')
+  const dry = recipes.filter(r => r.packStyle === 'dry')
   if (dry.length) {
     out.push(
       caution(
         'dry-pack-untested',
-        `Dry-pack (no-soak) canning (${dry.map((r) => r.name).join(', ')}) is household practice, not a laboratory-tested ` +
-          'process: USDA and NCHFP publish times only for beans soaked and pre-cooked, then hot-packed (OSU EM 9435; ' +
-          'Penn State Extension). Never put more dry beans in a jar than the fill cap.',
+        `Dry-pack (no-soak) canning (${dry.map(r => r.name).join(', ')}) is household practice, not a laboratory-tested `
+        + 'process: USDA and NCHFP publish times only for beans soaked and pre-cooked, then hot-packed (OSU EM 9435; '
+        + 'Penn State Extension). Never put more dry beans in a jar than the fill cap.',
       ),
     )
   }
@@ -37,48 +37,49 @@ export function standingWarnings({ recipes, canners, loads, jarSizes, feet, toda
       // The stored caution usually opens with the same words; say them once.
       const extra = r.caution ? ` ${r.caution.replace(/^untested\s*[—-]\s*your own risk\.?\s*/i, '')}` : ''
       out.push(caution('house-recipe-untested', `${r.name} is a house recipe: untested — your own risk.${extra.trimEnd()}`))
-    } else if (r.caution) {
+    }
+    else if (r.caution) {
       out.push(caution('recipe-caution', `${r.name}: ${r.caution}`))
     }
   }
   canners.forEach((c, k) => {
-    const mine = loads.filter((l) => l.cannerId === c.id)
+    const mine = loads.filter(l => l.cannerId === c.id)
     if (mine.length === 0) return
     const test = gaugeTestWarning(c, today, `canners[${k}].lastGaugeTestAt`)
     if (test) out.push(test)
-    const psi = Math.max(...mine.map((l) => l.pressurePsi))
+    const psi = Math.max(...mine.map(l => l.pressurePsi))
     const base = Math.min(
-      ...mine.flatMap((l) => l.recipeIds.map((id) => seaLevelPsi(recipes.find((r) => r.id === id)!, c.gaugeType) ?? psi)),
+      ...mine.flatMap(l => l.recipeIds.map(id => seaLevelPsi(recipes.find(r => r.id === id)!, c.gaugeType) ?? psi)),
     )
     if (psi > base) {
       out.push(
         caution(
           'altitude-adjusted',
-          `At ${feet.toLocaleString('en-US')} ft, process at ${psi} psi on the ${c.gaugeType} gauge of ${c.name}, ` +
-            `not the sea-level ${base} psi.`,
+          `At ${feet.toLocaleString('en-US')} ft, process at ${psi} psi on the ${c.gaugeType} gauge of ${c.name}, `
+          + `not the sea-level ${base} psi.`,
           'altitudeFt',
         ),
       )
     }
   })
-  const headspaces = [...new Set(recipes.map((r) => formatLength(r.headspaceMm, system)))]
+  const headspaces = [...new Set(recipes.map(r => formatLength(r.headspaceMm, system)))]
   out.push(
     caution(
       'procedure',
-      `Leave ${headspaces.join(' or ')} headspace. Vent steam for a full 10 minutes before pressurising, keep the ` +
-        'pressure at or above the setting for the whole time, and let the canner cool to zero on its own — never ' +
-        'force-cool it. When in doubt, follow current published guidance, your extension office and the canner’s manual.',
+      `Leave ${headspaces.join(' or ')} headspace. Vent steam for a full 10 minutes before pressurising, keep the `
+      + 'pressure at or above the setting for the whole time, and let the canner cool to zero on its own — never '
+      + 'force-cool it. When in doubt, follow current published guidance, your extension office and the canner’s manual.',
     ),
   )
-  const large = [...new Set(loads.map((l) => l.jarSizeId))]
-    .map((id) => jarSizes.find((j) => j.id === id))
+  const large = [...new Set(loads.map(l => l.jarSizeId))]
+    .map(id => jarSizes.find(j => j.id === id))
     .filter((j): j is JarSize => j !== undefined && j.capacityMl > (ML_PER_QUART / 2) * 1.001)
   if (large.length) {
     out.push(
       info(
         'store-comparison',
-        `The store comparison counts one can per jar; a ${large[0]!.name} jar holds more than one can, ` +
-          'so the real saving is larger.',
+        `The store comparison counts one can per jar; a ${large[0]!.name} jar holds more than one can, `
+        + 'so the real saving is larger.',
       ),
     )
   }

@@ -36,7 +36,7 @@ describe('Shelfstead palette pairings meet WCAG AA', () => {
 
   it('uses steel-line only for decoration: it is too faint for a control edge', () => {
     expect(contrastRatio(palette.steel.line, palette.glass.raised)).toBeLessThan(3)
-    expect(pairings.some((p) => p.fg === 'steel-line')).toBe(false)
+    expect(pairings.some(p => p.fg === 'steel-line')).toBe(false)
   })
 })
 

@@ -24,7 +24,8 @@ describe('fill cap d_max = f·V/E', () => {
     expect(ask).toThrow(/safe fill of ½ cup \(97 g\) \(118 mL\)/)
     try {
       ask()
-    } catch (e) {
+    }
+    catch (e) {
       expect((e as PlanningRefusal).field).toBe('lines[0].dryMlPerJar')
     }
   })
@@ -47,7 +48,7 @@ describe('tested hot pack: published amounts (USDA Complete Guide (AIB 539) Guid
   it('the published amount exceeds the dry-pack cap and is reported, not refused (it is a buying average)', () => {
     const fill = perJarFill(usdaDryBeans, quart, blackBeans, jarSizes, {}, 'l')
     expect(fill.fillFractionOfCap).toBeGreaterThan(1)
-    expect(fill.warnings.map((w) => w.code)).toContain('published-amount-above-cap')
+    expect(fill.warnings.map(w => w.code)).toContain('published-amount-above-cap')
   })
 })
 

@@ -56,7 +56,7 @@ export const usdaDryBeans: Recipe = {
 }
 
 /** Published products of CG Guide 4 with their pint/quart times (reference §3). */
-export const publishedProducts: Array<{ name: string; pint: number; quart: number; source: string }> = [
+export const publishedProducts: Array<{ name: string, pint: number, quart: number, source: string }> = [
   { name: 'Dry beans or peas', pint: 75, quart: 90, source: 'CG Guide 4 Tables 1–2; MSU-PFS 01600235' },
   { name: 'Beans with tomato or molasses sauce', pint: 65, quart: 75, source: 'CG Guide 4; MSU-PFS 01600236; EDIS FCS8304' },
   { name: 'Baked beans', pint: 65, quart: 75, source: 'CG Guide 4; MSU-PFS 01600237' },
@@ -64,7 +64,7 @@ export const publishedProducts: Array<{ name: string; pint: number; quart: numbe
   { name: 'Soups with dried beans', pint: 60, quart: 75, source: 'CG Guide 4; MSU-PFS 01600886' },
 ]
 
-export function productRecipe(p: { name: string; pint: number; quart: number; source: string }): Recipe {
+export function productRecipe(p: { name: string, pint: number, quart: number, source: string }): Recipe {
   return { ...usdaDryBeans, id: `r-${p.name}`, name: p.name, processMinutes: times(p.pint, p.quart), source: p.source }
 }
 

@@ -25,11 +25,11 @@ describe('spreading jars evenly over loads', () => {
 describe('loads on one canner', () => {
   it('18 pints in a 9-pint canner: 2 loads of 9', () => {
     const loads = buildLoads([line(0, 18, 75)], ['a'], () => nine, minutes)
-    expect(loads.map((l) => l.jars)).toEqual([9, 9])
-    expect(loads.every((l) => l.processMinutes === 75 && l.pressurePsi === 10 && l.cannerId === 'a')).toBe(true)
+    expect(loads.map(l => l.jars)).toEqual([9, 9])
+    expect(loads.every(l => l.processMinutes === 75 && l.pressurePsi === 10 && l.cannerId === 'a')).toBe(true)
   })
   it('20 pints: 3 loads of 7, 7 and 6 rather than 9, 9 and a near-empty 2', () => {
-    expect(buildLoads([line(0, 20, 75)], ['a'], () => nine, minutes).map((l) => l.jars)).toEqual([7, 7, 6])
+    expect(buildLoads([line(0, 20, 75)], ['a'], () => nine, minutes).map(l => l.jars)).toEqual([7, 7, 6])
   })
   it('two layers: 14 jars in a 9-per-layer, 2-layer canner fill the bottom layer first', () => {
     const [load] = buildLoads([line(0, 14, 75)], ['a'], fitOne(9, 2), minutes)
@@ -46,30 +46,30 @@ describe('sharing loads', () => {
   })
   it('the longest-time line is loaded first, so only the boundary load mixes', () => {
     const loads = buildLoads([line(0, 9, 60), line(1, 9, 75)], ['a'], () => nine, minutes)
-    expect(loads.map((l) => [l.processMinutes, l.note === null])).toEqual([[75, true], [60, true]])
+    expect(loads.map(l => [l.processMinutes, l.note === null])).toEqual([[75, true], [60, true]])
   })
   it('different pressure or jar size never share a load', () => {
     const psi = buildLoads([line(0, 4, 75), line(1, 4, 75, { psiByCanner: { a: 15 } })], ['a'], () => nine, minutes)
-    expect(psi.map((l) => [l.jars, l.pressurePsi])).toEqual([[4, 10], [4, 15]])
+    expect(psi.map(l => [l.jars, l.pressurePsi])).toEqual([[4, 10], [4, 15]])
     const size = buildLoads([line(0, 4, 75), line(1, 4, 90, { jarSizeId: 'quart' })], ['a'], () => nine, minutes)
-    expect(size.map((l) => l.jarSizeId)).toEqual(['pint', 'quart'])
+    expect(size.map(l => l.jarSizeId)).toEqual(['pint', 'quart'])
   })
 })
 
 describe('two canners side by side', () => {
   it('18 pints: one load on each canner', () => {
     const loads = buildLoads([line(0, 18, 75)], ['a', 'b'], fitOne(9), minutes)
-    expect(loads.map((l) => [l.cannerId, l.jars])).toEqual([['a', 9], ['b', 9]])
+    expect(loads.map(l => [l.cannerId, l.jars])).toEqual([['a', 9], ['b', 9]])
   })
   it('8 pints fit one load: the second canner stays cold', () => {
-    expect(buildLoads([line(0, 8, 75)], ['a', 'b'], fitOne(9), minutes).map((l) => l.cannerId)).toEqual(['a'])
+    expect(buildLoads([line(0, 8, 75)], ['a', 'b'], fitOne(9), minutes).map(l => l.cannerId)).toEqual(['a'])
   })
   it('loads keep alternating across groups', () => {
     const loads = buildLoads([line(0, 9, 75), line(1, 7, 90, { jarSizeId: 'quart' })], ['a', 'b'], fitOne(9), minutes)
-    expect(loads.map((l) => l.cannerId)).toEqual(['a', 'b'])
+    expect(loads.map(l => l.cannerId)).toEqual(['a', 'b'])
   })
   it('a canner that cannot hold the jar is skipped', () => {
     const fit = (id: string): CannerFit => ({ cannerId: id, perLayer: id === 'a' ? 0 : 9, layers: 1 })
-    expect(buildLoads([line(0, 12, 75)], ['a', 'b'], fit, minutes).map((l) => [l.cannerId, l.jars])).toEqual([['b', 6], ['b', 6]])
+    expect(buildLoads([line(0, 12, 75)], ['a', 'b'], fit, minutes).map(l => [l.cannerId, l.jars])).toEqual([['b', 6], ['b', 6]])
   })
 })

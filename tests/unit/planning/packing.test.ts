@@ -89,7 +89,7 @@ describe('drawn arrangements: real coordinates', () => {
   })
   it('layoutTimings covers 1…40 without blowing up', () => {
     const timings = layoutTimings(undefined, 5)
-    expect(timings.map((t) => t.n)).toEqual(Array.from({ length: 40 }, (_, i) => i + 1))
+    expect(timings.map(t => t.n)).toEqual(Array.from({ length: 40 }, (_, i) => i + 1))
     for (const t of timings) expect(t.perLayer).toBeGreaterThanOrEqual(t.n)
   })
 })

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { PlanningRefusal, planBatch, type PlanLineRequest, type PlanRequest } from '../../../utils/planning'
 import {
-  TODAY, catalogue, dialCanner, dryPack, halfGallon, halfPint, household, largeCanner, pint, productRecipe, publishedProducts,
+  TODAY, catalogue, dialCanner, dryPack, halfGallon, halfPint, household, pint, productRecipe, publishedProducts,
   quart, standardCanner, usdaDryBeans,
 } from './fixtures'
 
@@ -14,12 +14,13 @@ const jars = (recipeId: string, jarSizeId: string, n: number, extra: Partial<Pla
   recipeId, jarSizeId, amount: { mode: 'jars', jars: n }, ...extra,
 })
 const plan = (r: PlanRequest, cat = catalogue) => planBatch(r, cat, household)
-const codes = (r: ReturnType<typeof plan>) => r.warnings.map((w) => w.code)
+const codes = (r: ReturnType<typeof plan>) => r.warnings.map(w => w.code)
 
 function refusal(run: () => unknown): PlanningRefusal {
   try {
     run()
-  } catch (e) {
+  }
+  catch (e) {
     expect(e).toBeInstanceOf(PlanningRefusal)
     expect((e as PlanningRefusal).message.length).toBeGreaterThan(10)
     return e as PlanningRefusal
@@ -49,18 +50,18 @@ describe('the USDA hot pack, 9 pints (USDA Complete Guide (AIB 539) Guide 4)', (
     expect(r.schedule.endAt).toBe(`${TODAY}T10:30:00`)
   })
   it('buys one 4 lb bag, leaving ¾ lb; one pack of lids; no jars (12 owned)', () => {
-    const beans = r.shopping.find((s) => s.kind === 'ingredient')!
+    const beans = r.shopping.find(s => s.kind === 'ingredient')!
     expect(beans.packages).toEqual([expect.objectContaining({ size: 4 * LB, count: 1, priceCents: 599 })])
     expect(beans.leftover).toBeCloseTo(0.75 * LB, 6)
     expect(r.lines[0]!.leftoverGrams).toBeCloseTo(0.75 * LB, 6)
-    expect(r.shopping.find((s) => s.kind === 'lid')).toMatchObject({ quantity: 9, cost: 399 })
-    expect(r.shopping.some((s) => s.kind === 'jar')).toBe(false)
+    expect(r.shopping.find(s => s.kind === 'lid')).toMatchObject({ quantity: 9, cost: 399 })
+    expect(r.shopping.some(s => s.kind === 'jar')).toBe(false)
   })
   it('carries the procedure caution and no dry-pack or gauge-test caution', () => {
     expect(codes(r)).toContain('procedure')
     expect(codes(r)).not.toContain('dry-pack-untested')
     expect(codes(r)).not.toContain('gauge-test-due')
-    expect(r.warnings.findIndex((w) => w.level === 'info')).toBeGreaterThan(r.warnings.findLastIndex((w) => w.level === 'caution'))
+    expect(r.warnings.findIndex(w => w.level === 'info')).toBeGreaterThan(r.warnings.findLastIndex(w => w.level === 'caution'))
   })
 })
 
@@ -126,7 +127,7 @@ describe('more than one line or canner', () => {
   it('two canners side by side: 18 pints in 150 minutes instead of 300', () => {
     const second = { ...standardCanner, id: 'c-std-2', name: 'Second canner' }
     const r = plan(request([jars(usdaDryBeans.id, pint.id, 18)], { canners: [standardCanner, second] }))
-    expect(r.loads.map((l) => [l.cannerId, l.jars])).toEqual([[standardCanner.id, 9], [second.id, 9]])
+    expect(r.loads.map(l => [l.cannerId, l.jars])).toEqual([[standardCanner.id, 9], [second.id, 9]])
     expect(r.schedule.totalMinutes).toBe(150)
   })
   it('a soup (60 min) and dry beans (75 min) share a pint load, timed for the longest', () => {
@@ -153,7 +154,7 @@ describe('goods and consumption', () => {
     // to 0.001 g: convert-units' cup is 3 parts in 10⁹ off NIST, so a level ½ cup is 96.9999995 g
     expect(r.lines[0]!.leftoverGrams).toBeCloseTo(4 * LB - 18 * 97, 3)
     expect(r.lines[0]!.partJar).toBeCloseTo((4 * LB) / 97 - 18, 6)
-    expect(r.shopping.some((s) => s.kind === 'ingredient')).toBe(false)
+    expect(r.shopping.some(s => s.kind === 'ingredient')).toBe(false)
     expect(codes(r)).toContain('goods-leftover')
   })
   it('4 jars a month for 6 months with 4 on the shelf: 20 jars, and a yearly saving', () => {

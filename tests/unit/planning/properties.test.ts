@@ -19,7 +19,8 @@ describe('fill', () => {
       try {
         const fill = perJarFill(recipe, jar, bean, jarSizes, { dryMlPerJar: ask }, 'l')
         expect(fill.dryMl).toBeLessThanOrEqual(fill.capMl * (1 + 1e-9))
-      } catch (e) {
+      }
+      catch (e) {
         expect(e).toBeInstanceOf(PlanningRefusal)
       }
     },
@@ -58,20 +59,20 @@ describe('loads', () => {
       const ids = fits.map((_, i) => `c${i}`)
       const lines: LoadLine[] = specs.map((s, i) => ({
         lineIndex: i, recipeId: `r${i}`, jarSizeId: s.jarSizeId, jars: s.jars, processMinutes: s.processMinutes,
-        psiByCanner: Object.fromEntries(ids.map((id) => [id, s.psi])),
+        psiByCanner: Object.fromEntries(ids.map(id => [id, s.psi])),
       }))
       const fit = (cannerId: string) => ({ cannerId, ...fits[Number(cannerId.slice(1))]! })
       const loads = buildLoads(lines, ids, fit, () => 150)
       const total = specs.reduce((s, l) => s + l.jars, 0)
       expect(loads.reduce((s, l) => s + l.jars, 0)).toBe(total)
       lines.forEach((line) => {
-        const loaded = loads.flatMap((l) => l.contents).filter((c) => c.lineIndex === line.lineIndex)
+        const loaded = loads.flatMap(l => l.contents).filter(c => c.lineIndex === line.lineIndex)
         expect(loaded.reduce((s, c) => s + c.jars, 0)).toBe(line.jars)
       })
       for (const load of loads) {
         expect(load.jars).toBeGreaterThan(0)
         expect(load.jars).toBeLessThanOrEqual(load.capacity)
-        expect(load.processMinutes).toBe(Math.max(...load.contents.map((c) => c.processMinutes)))
+        expect(load.processMinutes).toBe(Math.max(...load.contents.map(c => c.processMinutes)))
       }
       const groups = new Map<string, typeof loads>()
       for (const l of loads) {
@@ -123,13 +124,13 @@ describe('schedule', () => {
       const loads = specs.map((s, i) => ({ index: i + 1, ...s }))
       const s = buildSchedule(loads, parseStart('2025-09-14T08:00Z', undefined), { ...DEFAULT_STEP_MINUTES, ...over })
       for (const id of ['a', 'b']) {
-        const steps = s.steps.filter((x) => x.cannerId === id).sort((x, y) => x.startMinute - y.startMinute || x.endMinute - y.endMinute)
+        const steps = s.steps.filter(x => x.cannerId === id).sort((x, y) => x.startMinute - y.startMinute || x.endMinute - y.endMinute)
         steps.forEach((x, i) => {
           expect(x.endMinute - x.startMinute).toBe(x.minutes)
           if (i > 0) expect(x.startMinute).toBeGreaterThanOrEqual(steps[i - 1]!.endMinute)
         })
       }
-      expect(s.totalMinutes).toBe(Math.max(0, ...s.steps.map((x) => x.endMinute)))
+      expect(s.totalMinutes).toBe(Math.max(0, ...s.steps.map(x => x.endMinute)))
     },
   )
 })
@@ -150,8 +151,8 @@ describe('refusals', () => {
     }),
   )
   const line: fc.Arbitrary<PlanLineRequest> = fc.record({
-    recipeId: fc.constantFrom(...catalogue.recipes.map((r) => r.id), 'unknown'),
-    jarSizeId: fc.constantFrom(...catalogue.jarSizes.map((j) => j.id), 'unknown'),
+    recipeId: fc.constantFrom(...catalogue.recipes.map(r => r.id), 'unknown'),
+    jarSizeId: fc.constantFrom(...catalogue.jarSizes.map(j => j.id), 'unknown'),
     amount,
     saltTsp: fc.option(wild, { nil: undefined }),
     dryMlPerJar: fc.option(wild, { nil: undefined }),
@@ -182,7 +183,8 @@ describe('refusals', () => {
         expect(r.loads.length).toBeGreaterThan(0)
         expect(r.loads.reduce((s, l) => s + l.jars, 0)).toBe(r.totals.jars)
         for (const l of r.layouts) expect(layoutViolations(l.positions, l.cannerDiameterMm, l.jarDiameterMm, l.clearanceMm)).toEqual([])
-      } catch (e) {
+      }
+      catch (e) {
         if (!(e instanceof PlanningRefusal)) throw e
         expect(e.message.trim().length).toBeGreaterThan(0)
       }

@@ -10,7 +10,7 @@ const start = parseStart('2025-09-14T08:00', undefined)
 describe('one load', () => {
   it('pints at 75 min: 15 + 10 + 5 + 75 + 30 + 10 + 5 = 150 min, 08:00 to 10:30', () => {
     const s = buildSchedule([load(1, 'a', 75, 30)], start, DEFAULT_STEP_MINUTES)
-    expect(s.steps.map((x) => [x.step, x.minutes])).toEqual([
+    expect(s.steps.map(x => [x.step, x.minutes])).toEqual([
       ['heat', 15], ['vent', 10], ['pressurise', 5], ['process', 75], ['cool', 30], ['wait', 10], ['unload', 5],
     ])
     expect(s.totalMinutes).toBe(150)
@@ -26,12 +26,12 @@ describe('several loads', () => {
   it('one canner: the next load starts when the previous is unloaded', () => {
     const s = buildSchedule([load(1, 'a', 75, 30), load(2, 'a', 75, 30)], start, DEFAULT_STEP_MINUTES)
     expect(s.totalMinutes).toBe(300)
-    expect(s.steps.find((x) => x.load === 2 && x.step === 'heat')).toMatchObject({ startMinute: 150, start: '2025-09-14T10:30:00' })
+    expect(s.steps.find(x => x.load === 2 && x.step === 'heat')).toMatchObject({ startMinute: 150, start: '2025-09-14T10:30:00' })
   })
   it('two canners run side by side', () => {
     const s = buildSchedule([load(1, 'a', 75, 30), load(2, 'b', 75, 30)], start, DEFAULT_STEP_MINUTES)
     expect(s.totalMinutes).toBe(150)
-    expect(s.steps.filter((x) => x.step === 'heat').map((x) => x.startMinute)).toEqual([0, 0])
+    expect(s.steps.filter(x => x.step === 'heat').map(x => x.startMinute)).toEqual([0, 0])
   })
 })
 

@@ -44,7 +44,7 @@ describe('the market list', () => {
     )
   it('9 pints with 12 pint jars owned: beans, salt, one pack of 12 lids, vinegar; no jars', () => {
     const { items } = build(9)
-    expect(items.map((i) => [i.kind, i.quantity, i.packages.map((p) => p.count), i.cost])).toEqual([
+    expect(items.map(i => [i.kind, i.quantity, i.packages.map(p => p.count), i.cost])).toEqual([
       ['ingredient', 873, [1], 349],
       ['salt', 13.5, [1], 399],
       ['lid', 9, [1], 399],
@@ -54,8 +54,8 @@ describe('the market list', () => {
   })
   it('18 pints with 12 owned: a case of 12 jars (6 used), and its 12 lids leave 6 lids to buy', () => {
     const { items } = build(18)
-    expect(items.find((i) => i.kind === 'jar')).toMatchObject({ quantity: 6, leftover: 6, cost: 1399 })
-    expect(items.find((i) => i.kind === 'lid')).toMatchObject({ quantity: 6, cost: 399 })
+    expect(items.find(i => i.kind === 'jar')).toMatchObject({ quantity: 6, leftover: 6, cost: 1399 })
+    expect(items.find(i => i.kind === 'lid')).toMatchObject({ quantity: 6, cost: 399 })
   })
   it('a missing price is listed without a cost and reported', () => {
     const r = buildShopping(
