@@ -1,19 +1,23 @@
 import { toTypedSchema } from '@vee-validate/zod'
 import { useForm } from 'vee-validate'
 import type { ZodType, ZodTypeDef } from 'zod'
+import type { ApiErrorData, ApiIssue } from '~/utils/schemas/errors'
 
-interface ApiErrorData {
-  message?: string
-  data?: { issues?: Array<{ field: string, message: string }> } & { data?: { issues?: Array<{ field: string, message: string }> } }
+/**
+ * The API's one error envelope (server/utils/errors.ts) as $fetch reports it: the response body
+ * is `{ message, data: { field?, issues } }`. Anything else (a network failure) gets a general
+ * message.
+ */
+export function apiError(error: unknown): { message: string, field: string | null, issues: ApiIssue[] } {
+  const body = (error as { data?: { message?: unknown, data?: Partial<ApiErrorData> } } | null)?.data
+  const message = typeof body?.message === 'string' && body.message
+    ? body.message
+    : 'Shelfstead could not be reached. Check the connection and try again.'
+  return { message, field: body?.data?.field ?? null, issues: body?.data?.issues ?? [] }
 }
 
-/** The server's message for a failed $fetch, and per-field issues when it sent them (400). */
-export function apiError(error: unknown): { message: string, issues: Array<{ field: string, message: string }> } {
-  const data = (error as { data?: ApiErrorData })?.data
-  const issues = data?.data?.issues ?? data?.data?.data?.issues ?? []
-  const message = data?.message ?? (error instanceof Error ? error.message : 'Something went wrong. Try again.')
-  return { message, issues }
-}
+/** The server names fields "lines.0.jars"; vee-validate keys them "lines[0].jars". */
+export const formPath = (field: string) => field.replace(/\.(\d+)(?=\.|$)/g, '[$1]')
 
 /**
  * A vee-validate form on the same zod schema the API route uses. `submit(fn)` runs `fn` with
@@ -37,8 +41,9 @@ export function useApiForm<TOut extends Record<string, unknown>, TIn = TOut>(
       }
       catch (error) {
         const { message, issues } = apiError(error)
-        const known = issues.filter(i => i.field in form.values)
-        for (const issue of known) form.setFieldError(issue.field as never, issue.message)
+        const fields = new Set(Object.keys(form.meta.value.initialValues ?? {}).concat(Object.keys(form.values)))
+        const known = issues.filter(i => i.field && fields.has(i.field.split('.')[0]!))
+        for (const issue of known) form.setFieldError(formPath(issue.field) as never, issue.message)
         if (!known.length) formError.value = message
       }
       finally {

@@ -67,7 +67,7 @@ export async function loadCanners(db: Database, householdId: string) {
 export async function requireCanner(db: Database, householdId: string, cannerId: string) {
   const [row] = await db.select().from(tables.canners)
     .where(and(eq(tables.canners.id, cannerId), eq(tables.canners.householdId, householdId)))
-  if (!row) throw createError({ statusCode: 404, message: 'No such canner in this household.' })
+  if (!row) notFound('No such canner in this household.')
   return row
 }
 
@@ -89,7 +89,7 @@ function toPriceItem(row: typeof tables.priceItems.$inferSelect): PriceItem | nu
 /** The household's settings, prices and empty jars in the planning computation's shape. */
 export async function loadHouseholdSettings(db: Database, householdId: string): Promise<HouseholdSettings & { name: string }> {
   const [household] = await db.select().from(tables.households).where(eq(tables.households.id, householdId))
-  if (!household) throw createError({ statusCode: 404, message: 'No such household.' })
+  if (!household) notFound('No such household.')
   const [prices, stock] = await Promise.all([
     db.select().from(tables.priceItems).where(eq(tables.priceItems.householdId, householdId)),
     db.select().from(tables.jarStock).where(eq(tables.jarStock.householdId, householdId)),

@@ -9,19 +9,11 @@ import { computePlan, requirePlan } from './plans'
 type Tx = Parameters<Parameters<Database['transaction']>[0]>[0]
 type Db = Database | Tx
 
-export function badField(field: string, message: string): never {
-  throw createError({ statusCode: 400, message: `${field}: ${message}`, data: { issues: [{ field, message }] } })
-}
-
-export function refuse(message: string, field?: string): never {
-  throw createError({ statusCode: 422, message, data: { field, issues: field ? [{ field, message }] : [] } })
-}
-
 /** A load of this household, or a 404 that reveals nothing about other households. */
 export async function requireLoad(db: Db, householdId: string, loadId: string) {
   const [load] = await db.select().from(tables.canningLoads)
     .where(and(eq(tables.canningLoads.id, loadId), eq(tables.canningLoads.householdId, householdId)))
-  if (!load) throw createError({ statusCode: 404, message: 'No such load in this household.' })
+  if (!load) notFound('No such load in this household.')
   return load
 }
 
@@ -39,12 +31,12 @@ export function requiredFor(
   jarSizes: readonly JarSize[],
   gaugeType: 'dial' | 'weighted',
   altitudeFt: number,
-): { required: RequiredProcess | null, refusal?: string } {
+): { required: RequiredProcess | null, reason?: string } {
   try {
     return { required: requiredProcess(lines, jarSizes, gaugeType, altitudeFt) }
   }
   catch (error) {
-    if (error instanceof PlanningRefusal) return { required: null, refusal: error.message }
+    if (error instanceof PlanningRefusal) return { required: null, reason: error.message }
     throw error
   }
 }
@@ -61,12 +53,12 @@ export async function createLoad(db: Database, householdId: string, userId: stri
     db.select().from(tables.households).where(eq(tables.households.id, householdId)),
     db.select().from(tables.canners).where(and(eq(tables.canners.id, body.cannerId), eq(tables.canners.householdId, householdId))),
   ])
-  if (!canner) badField('cannerId', 'That canner is not one of this household\'s canners. Choose one from the list.')
+  if (!canner) badInput('cannerId', 'That canner is not one of this household\'s canners. Choose one from the list.')
   const lines = body.lines.map((line, i) => {
     const recipe = catalogue.recipes.find(r => r.id === line.recipeId)
-    if (!recipe) badField(`lines.${i}.recipeId`, 'That recipe is not in your Recipe book. Choose one from the list.')
+    if (!recipe) badInput(`lines.${i}.recipeId`, 'That recipe is not in your Recipe book. Choose one from the list.')
     const jarSize = catalogue.jarSizes.find(j => j.id === line.jarSizeId)
-    if (!jarSize) badField(`lines.${i}.jarSizeId`, 'That jar size is not in the jar catalogue.')
+    if (!jarSize) badInput(`lines.${i}.jarSizeId`, 'That jar size is not in the jar catalogue.')
     return { ...line, recipe, jarSize, product: line.product || recipes.find(r => r.id === recipe.id)!.name }
   })
 
@@ -75,14 +67,14 @@ export async function createLoad(db: Database, householdId: string, userId: stri
     const plan = await requirePlan(db, householdId, body.planId)
     const result = await computePlan(db, householdId, plan.request).catch(() => null)
     const load = result?.loads.find(l => l.index === body.planLoad)
-    if (result && !load) badField('planLoad', `That plan has loads 1 to ${result.loads.length}.`)
+    if (result && !load) badInput('planLoad', `That plan has loads 1 to ${result.loads.length}.`)
     if (load) planned = { psi: load.pressurePsi, minutes: load.processMinutes }
   }
-  const { required: table, refusal } = requiredFor(lines, catalogue.jarSizes, canner.gaugeType, household!.altitudeFt)
+  const { required: table, reason } = requiredFor(lines, catalogue.jarSizes, canner.gaugeType, household!.altitudeFt)
   const required = table && planned
     ? { ...table, psi: Math.max(table.psi, planned.psi), minutes: Math.max(table.minutes, planned.minutes) }
     : table
-  const shortfall = loadShortfall({ psi: body.pressurePsi, minutes: body.processMinutes }, required, refusal)
+  const shortfall = loadShortfall({ psi: body.pressurePsi, minutes: body.processMinutes }, required, reason)
   const endedAt = new Date(body.endedAt)
 
   const id = await db.transaction(async (tx) => {
@@ -138,10 +130,10 @@ export async function createLoad(db: Database, householdId: string, userId: stri
 export async function updateLoad(db: Database, householdId: string, loadId: string, body: LoadUpdateInput) {
   const load = await requireLoad(db, householdId, loadId)
   const run = body.pressurePsi !== undefined || body.processMinutes !== undefined || body.startedAt !== undefined || body.endedAt !== undefined
-  if (run && load.status !== 'pending') refuse('This load is already logged; only its notes can change. Log a new load for another run.')
+  if (run && load.status !== 'pending') refusal('This load is already logged; only its notes can change. Log a new load for another run.')
   if (run) {
     for (const field of ['pressurePsi', 'processMinutes', 'startedAt', 'endedAt'] as const) {
-      if (body[field] === undefined) badField(field, 'Give the pressure, the minutes, the start and the end of the run.')
+      if (body[field] === undefined) badInput(field, 'Give the pressure, the minutes, the start and the end of the run.')
     }
   }
   await db.transaction(async (tx) => {

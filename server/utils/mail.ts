@@ -86,10 +86,10 @@ export async function parseMessage(raw: string) {
 async function getTransport(): Promise<Transporter> {
   if (transport) return transport
   const mode = mailMode()
-  if (mode === 'off') throw createError({ statusCode: 503, message: 'E-mail is not set up on this server: give SMTP_URL (or SMTP_HOST) and MAIL_FROM.' })
+  if (mode === 'off') unavailable('E-mail is not set up on this server: give SMTP_URL (or SMTP_HOST) and MAIL_FROM.')
   if (mode === 'fake') {
     const port = fake?.port ?? await fakeStarting
-    if (!port) throw createError({ statusCode: 503, message: 'The local mail fake is not running.' })
+    if (!port) unavailable('The local mail fake is not running.')
     transport = nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true })
     return transport
   }

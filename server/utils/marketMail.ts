@@ -11,7 +11,7 @@ export async function sendMarketList(db: Database, householdId: string, planId: 
     .from(tables.memberships).innerJoin(tables.users, eq(tables.users.id, tables.memberships.userId))
     .where(and(eq(tables.memberships.householdId, householdId), eq(tables.memberships.userId, userId)))
   if (!member) {
-    throw createError({ statusCode: 400, message: 'userId: Send the list to a member of this household.', data: { issues: [{ field: 'userId', message: 'Choose a member of this household.' }] } })
+    badInput('userId', 'Send the list to a member of this household.')
   }
   const result = await computePlan(db, householdId, plan.request)
   const items = result.shopping.map(item => ({
@@ -38,7 +38,7 @@ export async function sendMarketList(db: Database, householdId: string, planId: 
     + `</tbody></table><p><strong>Total: ${money(total)}</strong></p><p>Lids are single-use: buy one new flat lid per jar. Bands are reused.</p><p><a href="${escapeHtml(link)}">Check items off as you shop</a></p>`
   const sent = await sendMail({ to: [member.email], subject: `Market list: ${plan.name}`, text, html }).catch((error) => {
     if ((error as { statusCode?: number }).statusCode) throw error
-    throw createError({ statusCode: 502, message: `The mail server did not take the message: ${(error as Error).message}` })
+    upstreamFailed(`The mail server did not take the message: ${(error as Error).message}`)
   })
   return { sentTo: member.email, items: items.length, messageId: sent.messageId }
 }

@@ -4,11 +4,11 @@ import type { Database } from './database'
 /** Store a photo of a load: checked by its content, at most 8 MB, keyed by household. */
 export async function savePhoto(db: Database, input: { householdId: string, loadId: string, userId: string, bytes: Buffer, name: string }) {
   if (input.bytes.byteLength > MAX_PHOTO_BYTES) {
-    throw createError({ statusCode: 413, message: 'That photo is larger than 8 MB. Send a smaller one (phones can share a reduced size).' })
+    tooLarge('That photo is larger than 8 MB. Send a smaller one (phones can share a reduced size).', 'photo')
   }
   const type = detectImageType(input.bytes)
   if (!type) {
-    throw createError({ statusCode: 400, message: 'photo: That file is not a JPEG, PNG or WebP picture (checked by its content, not its name).', data: { issues: [{ field: 'photo', message: 'That file is not a JPEG, PNG or WebP picture.' }] } })
+    badInput('photo', 'That file is not a JPEG, PNG or WebP picture (checked by its content, not its name).')
   }
   const id = crypto.randomUUID()
   const key = `${input.householdId}:${id}.${imageExtension[type]}`
@@ -29,14 +29,14 @@ export async function savePhoto(db: Database, input: { householdId: string, load
 async function requirePhoto(db: Database, householdId: string, photoId: string) {
   const [photo] = await db.select().from(tables.loadPhotos)
     .where(and(eq(tables.loadPhotos.id, photoId), eq(tables.loadPhotos.householdId, householdId)))
-  if (!photo) throw createError({ statusCode: 404, message: 'No such photo in this household.' })
+  if (!photo) notFound('No such photo in this household.')
   return photo
 }
 
 export async function readPhoto(db: Database, householdId: string, photoId: string) {
   const photo = await requirePhoto(db, householdId, photoId)
   const raw = await usePhotoStorage().getItemRaw(photo.storageKey)
-  if (!raw) throw createError({ statusCode: 404, message: 'The photo file is missing from storage.' })
+  if (!raw) notFound('The photo file is missing from storage.')
   const data = Buffer.isBuffer(raw) ? raw : Buffer.from(raw as ArrayBuffer)
   return { photo, data }
 }

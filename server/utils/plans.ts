@@ -11,10 +11,6 @@ function amountOf(line: PlanLineBody): PlanLineRequest['amount'] {
   return { mode: 'consumption', jarsPerMonth: line.jarsPerMonth!, months: line.months!, jarsOnShelf: line.jarsOnShelf }
 }
 
-function refuse(message: string, field?: string): never {
-  throw createError({ statusCode: 422, message, data: { field } })
-}
-
 /** Local wall-clock date (YYYY-MM-DD) of the server, for the gauge-test check. */
 function today(): string {
   const now = new Date()
@@ -35,7 +31,7 @@ export async function computePlan(db: Database, householdId: string, body: PlanR
   const cannerIds = body.cannerIds ?? [body.cannerId!]
   const canners = cannerIds.map((id, i) => {
     const row = cannerRows.find(c => c.id === id)
-    if (!row) refuse('That canner is not one of this household\'s canners. Choose one from the list.', body.cannerIds ? `cannerIds.${i}` : 'cannerId')
+    if (!row) refusal('That canner is not one of this household\'s canners. Choose one from the list.', body.cannerIds ? `cannerIds.${i}` : 'cannerId')
     return toPlanningCanner(row)
   })
 
@@ -43,14 +39,14 @@ export async function computePlan(db: Database, householdId: string, body: PlanR
   const planningRecipes = [...catalogue.recipes]
   const lines: PlanLineRequest[] = body.lines.map((line, i) => {
     const recipe = recipes.find(r => r.id === line.recipeId)
-    if (!recipe) refuse('That recipe is not in your Recipe book. Choose one from the list.', `lines.${i}.recipeId`)
-    if (!catalogue.jarSizes.some(j => j.id === line.jarSizeId)) refuse('That jar size is not in the jar catalogue.', `lines.${i}.jarSizeId`)
+    if (!recipe) refusal('That recipe is not in your Recipe book. Choose one from the list.', `lines.${i}.recipeId`)
+    if (!catalogue.jarSizes.some(j => j.id === line.jarSizeId)) refusal('That jar size is not in the jar catalogue.', `lines.${i}.jarSizeId`)
     let recipeId = recipe.id
     if (line.ingredientId && line.ingredientId !== recipe.ingredientId) {
       const ingredient = ingredients.find(g => g.id === line.ingredientId)
-      if (!ingredient) refuse('That bean is not in the ingredient list.', `lines.${i}.ingredientId`)
+      if (!ingredient) refusal('That bean is not in the ingredient list.', `lines.${i}.ingredientId`)
       const base = ingredients.find(g => g.id === recipe.ingredientId)
-      if (ingredient.form !== base?.form) refuse(`${recipe.name} is for ${base?.form ?? 'its own'} beans; ${ingredient.name} cannot be used with it.`, `lines.${i}.ingredientId`)
+      if (ingredient.form !== base?.form) refusal(`${recipe.name} is for ${base?.form ?? 'its own'} beans; ${ingredient.name} cannot be used with it.`, `lines.${i}.ingredientId`)
       recipeId = `${recipe.id}~${ingredient.id}`
       if (!planningRecipes.some(r => r.id === recipeId)) {
         planningRecipes.push({ ...recipe, id: recipeId, name: `${recipe.name} — ${ingredient.name}`, ingredientId: ingredient.id })
@@ -78,16 +74,26 @@ export async function computePlan(db: Database, householdId: string, body: PlanR
     return { ...result, household: { name: household.name, altitudeFt: household.altitudeFt, unitSystem: household.unitSystem } }
   }
   catch (error) {
-    if (error instanceof PlanningRefusal) refuse(error.message, error.field)
+    if (error instanceof PlanningRefusal) refusal(error.message, requestField(error.field, body))
     throw error
   }
+}
+
+/**
+ * The planning core names fields of its own input ("lines[0].amount.jars", "canners[1]");
+ * answer with the request's field instead ("lines.0.jars", "cannerIds.1" or "cannerId").
+ */
+function requestField(field: string | undefined, body: PlanRequestBody): string | undefined {
+  if (!field) return undefined
+  const dotted = field.replace(/\[(\d+)\]/g, '.$1').replace('.amount.', '.')
+  return dotted.replace(/^canners\.(\d+)/, (_, k: string) => (body.cannerIds ? `cannerIds.${k}` : 'cannerId'))
 }
 
 /** A saved plan of this household, or a 404 that reveals nothing about other households. */
 export async function requirePlan(db: Database, householdId: string, planId: string) {
   const [plan] = await db.select().from(tables.plans)
     .where(and(eq(tables.plans.id, planId), eq(tables.plans.householdId, householdId)))
-  if (!plan) throw createError({ statusCode: 404, message: 'No such plan in this household.' })
+  if (!plan) notFound('No such plan in this household.')
   return plan
 }
 

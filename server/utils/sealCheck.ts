@@ -2,7 +2,7 @@ import { and, asc, eq, isNotNull, isNull } from 'drizzle-orm'
 import { REPROCESS_WITHIN_HOURS, bestByDate, localDate, loadCode, sealRate, sealRatesBy, sealWindow } from '../../utils/after'
 import type { SealCheckInput } from '../../utils/schemas/logbook'
 import type { Database } from './database'
-import { badField, loadDetail, nextLoadNumber, refuse, requireLoad } from './logbook'
+import { loadDetail, nextLoadNumber, requireLoad } from './logbook'
 
 const when = (d: Date) => d.toLocaleString('en-US', { weekday: 'short', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' })
 
@@ -16,12 +16,12 @@ const when = (d: Date) => d.toLocaleString('en-US', { weekday: 'short', month: '
 export async function recordSealCheck(db: Database, householdId: string, userId: string, body: SealCheckInput) {
   const now = serverNow()
   const load = await requireLoad(db, householdId, body.loadId)
-  if (load.status !== 'done' || !load.endedAt) refuse('This load has not been run yet: log its run first, then check its seals 12–24 hours after it comes out.', 'loadId')
+  if (load.status !== 'done' || !load.endedAt) refusal('This load has not been run yet: log its run first, then check its seals 12–24 hours after it comes out.', 'loadId')
   const [existing] = await db.select({ id: tables.sealChecks.id }).from(tables.sealChecks).where(eq(tables.sealChecks.loadId, load.id))
-  if (existing) throw createError({ statusCode: 409, message: `The seal check of load ${loadCode(load.number)} is already recorded.` })
+  if (existing) conflict(`The seal check of load ${loadCode(load.number)} is already recorded.`)
   const window = sealWindow(load.endedAt, now)
   if (window.status === 'cooling') {
-    refuse(`Let the jars cool undisturbed: test the seals from ${when(window.dueAt)}, 12 hours after the load came out (USDA Complete Guide, "Cooling jars").`, 'loadId')
+    refusal(`Let the jars cool undisturbed: test the seals from ${when(window.dueAt)}, 12 hours after the load came out (USDA Complete Guide, "Cooling jars").`, 'loadId')
   }
 
   const [household] = await db.select().from(tables.households).where(eq(tables.households.id, householdId))
@@ -29,24 +29,24 @@ export async function recordSealCheck(db: Database, householdId: string, userId:
   const unsafe = load.shortfall !== null
   const plan = lines.map((line) => {
     const i = body.lines.findIndex(l => l.loadLineId === line.id)
-    if (i < 0) badField('lines', `Record every line of the load: ${line.product} is missing.`)
+    if (i < 0) badInput('lines', `Record every line of the load: ${line.product} is missing.`)
     return { line, input: body.lines[i]!, i }
   })
   body.lines.forEach((l, i) => {
-    if (!lines.some(line => line.id === l.loadLineId)) badField(`lines.${i}.loadLineId`, 'That line is not part of this load.')
+    if (!lines.some(line => line.id === l.loadLineId)) badInput(`lines.${i}.loadLineId`, 'That line is not part of this load.')
   })
   for (const { line, input, i } of plan) {
     if (input.sealed + input.unsealed !== line.jars) {
-      badField(`lines.${i}.unsealed`, `Sealed and unsealed jars must add up to the ${line.jars} jars of ${line.product} in this load.`)
+      badInput(`lines.${i}.unsealed`, `Sealed and unsealed jars must add up to the ${line.jars} jars of ${line.product} in this load.`)
     }
     const offShelf = unsafe ? line.jars : input.unsealed
     if (offShelf > 0 && !input.action) {
-      badField(`lines.${i}.action`, unsafe
+      badInput(`lines.${i}.action`, unsafe
         ? 'This load was under-processed, so none of its jars may go on the shelf: choose refrigerate or reprocess.'
         : 'Choose what to do with the unsealed jars: refrigerate, or reprocess within 24 hours.')
     }
     if (offShelf > 0 && input.action === 'reprocess' && now > window.reprocessBy) {
-      refuse(`It is more than ${REPROCESS_WITHIN_HOURS} hours since load ${loadCode(load.number)} came out, too late to reprocess (USDA Complete Guide, "Reprocessing unsealed jars"). Refrigerate the jars and eat them within several days.`, `lines.${i}.action`)
+      refusal(`It is more than ${REPROCESS_WITHIN_HOURS} hours since load ${loadCode(load.number)} came out, too late to reprocess (USDA Complete Guide, "Reprocessing unsealed jars"). Refrigerate the jars and eat them within several days.`, `lines.${i}.action`)
     }
   }
 
@@ -56,7 +56,7 @@ export async function recordSealCheck(db: Database, householdId: string, userId:
   await db.transaction(async (tx) => {
     const [check] = await tx.insert(tables.sealChecks).values({ loadId: load.id, householdId, checkedAt: now, checkedBy: userId, notes: body.notes })
       .onConflictDoNothing().returning()
-    if (!check) throw createError({ statusCode: 409, message: `The seal check of load ${code} is already recorded.` })
+    if (!check) conflict(`The seal check of load ${code} is already recorded.`)
     const reprocess: Array<{ line: typeof lines[number], jars: number }> = []
     for (const { line, input } of plan) {
       const offShelf = unsafe ? line.jars : input.unsealed

@@ -65,9 +65,9 @@ export async function takeOff(db: Database, householdId: string, userId: string,
     .where(and(eq(tables.shelfLots.householdId, householdId), inArray(tables.shelfLots.id, body.items.map(i => i.lotId))))
   body.items.forEach((item, i) => {
     const lot = lots.find(l => l.id === item.lotId)
-    if (!lot) throw createError({ statusCode: 404, message: 'No such lot on this household\'s Shelf.', data: { field: `items.${i}.lotId` } })
+    if (!lot) return notFound('No such lot on this household\'s Shelf.')
     if (item.jars > lot.jarsLeft) {
-      throw createError({ statusCode: 400, message: `items.${i}.jars: Only ${lot.jarsLeft} jars of ${lot.product} (${lot.loadCode || 'imported'}) are left on the Shelf.`, data: { issues: [{ field: `items.${i}.jars`, message: `Only ${lot.jarsLeft} jars are left in this lot.` }] } })
+      badInput(`items.${i}.jars`, `Only ${lot.jarsLeft} jars of ${lot.product} (${lot.loadCode || 'imported'}) are left on the Shelf.`)
     }
   })
   const batchId = randomUUID()
@@ -78,7 +78,7 @@ export async function takeOff(db: Database, householdId: string, userId: string,
         .set({ jarsLeft: sql`${tables.shelfLots.jarsLeft} - ${item.jars}`, updatedAt: now })
         .where(and(eq(tables.shelfLots.id, lot.id), sql`${tables.shelfLots.jarsLeft} >= ${item.jars}`))
         .returning({ id: tables.shelfLots.id })
-      if (!updated) throw createError({ statusCode: 409, message: `Someone took jars of ${lot.product} off meanwhile; reload the Shelf and try again.` })
+      if (!updated) conflict(`Someone took jars of ${lot.product} off meanwhile; reload the Shelf and try again.`)
       await tx.insert(tables.shelfMovements).values({
         householdId, batchId, lotId: lot.id, jars: item.jars, jarsReturned: body.returnJars ? item.jars : 0, movedAt: now, movedBy: userId,
       })
@@ -93,11 +93,11 @@ export async function undoLastTakeOff(db: Database, householdId: string) {
   const now = serverNow()
   await db.transaction(async (tx) => {
     const last = await lastBatch(tx, householdId)
-    if (!last) throw createError({ statusCode: 409, message: 'There is no take-off to undo.' })
+    if (!last) conflict('There is no take-off to undo.')
     const moves = await tx.update(tables.shelfMovements).set({ undoneAt: now })
       .where(and(eq(tables.shelfMovements.batchId, last.batchId), eq(tables.shelfMovements.householdId, householdId), isNull(tables.shelfMovements.undoneAt)))
       .returning()
-    if (!moves.length) throw createError({ statusCode: 409, message: 'That take-off was already undone.' })
+    if (!moves.length) conflict('That take-off was already undone.')
     for (const move of moves) {
       const [lot] = await tx.update(tables.shelfLots).set({ jarsLeft: sql`${tables.shelfLots.jarsLeft} + ${move.jars}`, updatedAt: now })
         .where(eq(tables.shelfLots.id, move.lotId)).returning()
@@ -107,7 +107,7 @@ export async function undoLastTakeOff(db: Database, householdId: string) {
           .where(and(eq(tables.jarStock.householdId, householdId), eq(tables.jarStock.jarSizeId, lot!.jarSizeId), sql`${tables.jarStock.count} >= ${move.jarsReturned}`))
           .returning()
         if (!stock) {
-          throw createError({ statusCode: 409, message: 'The empty jars from that take-off have been counted out of jar stock since; correct the jar stock on the Household page, then undo.' })
+          conflict('The empty jars from that take-off have been counted out of jar stock since; correct the jar stock on the Household page, then undo.')
         }
       }
     }
@@ -122,7 +122,7 @@ export async function clearFridgeItem(db: Database, householdId: string, itemId:
     const [item] = await tx.update(tables.fridgeItems).set({ clearedAt: now })
       .where(and(eq(tables.fridgeItems.id, itemId), eq(tables.fridgeItems.householdId, householdId), isNull(tables.fridgeItems.clearedAt)))
       .returning()
-    if (!item) throw createError({ statusCode: 404, message: 'No such jar on this household\'s refrigerator list.' })
+    if (!item) notFound('No such jar on this household\'s refrigerator list.')
     await addJarStock(tx, householdId, item.jarSizeId, item.jars)
   })
   return listShelf(db, householdId)

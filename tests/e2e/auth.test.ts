@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { ApiClient, startServer, type RunningServer } from '../support/server'
+import { ApiClient, expectField, startServer, type RunningServer } from '../support/server'
 
 let server: RunningServer
 
@@ -34,7 +34,7 @@ describe('sign-in, households and roles', () => {
     const api = new ApiClient(server.url)
     const res = await api.post('/api/auth/register', { email: 'not-an-email', password: 'short', name: '', householdName: 'x' })
     expect(res.status).toBe(400)
-    expect(res.body.message).toMatch(/^email: /)
+    expectField(res, 'email')
   })
 
   it('signs in with the demo owner password and signs out', async () => {
@@ -75,6 +75,29 @@ describe('sign-in, households and roles', () => {
     expect(changed.status).toBe(200)
     expect(changed.body.altitudeFt).toBe(2400)
     expect((await helper.get(`/api/households/${id}`)).body.altitudeFt).toBe(2400)
+  })
+
+  it('refuses an empty or malformed altitude, naming the field, and keeps the pressure the altitude needs', async () => {
+    const owner = new ApiClient(server.url)
+    const { households } = await owner.login('owner@demo.shelfstead.test')
+    const id = households[0]!.id
+    expect((await owner.patch(`/api/households/${id}`, { altitudeFt: 5000 })).status).toBe(200)
+    // Each of these was once read as 0 ft (or "0x1F40" as 8,000 ft) and answered "Saved."
+    for (const altitudeFt of ['', ' ', null, false, [], '0x1F40', '5000', {}]) {
+      const res = await owner.patch(`/api/households/${id}`, { altitudeFt })
+      expect(res.status, JSON.stringify(altitudeFt)).toBe(400)
+      expect(res.body.data.field).toBe('altitudeFt')
+      expect(res.body.message).toMatch(/altitude/i)
+      expect(res.body.message).not.toMatch(/^altitudeFt:|Expected|Required/)
+    }
+    expect((await owner.get(`/api/households/${id}`)).body.altitudeFt).toBe(5000)
+    // USDA Complete Guide, Guide 4, Table 2: a weighted gauge above 1,000 ft needs 15 psi (10 psi at 0 ft).
+    const canners = (await owner.get(`/api/households/${id}/canners`)).body as Array<{ id: string, gaugeType: string }>
+    const weighted = canners.find(c => c.gaugeType === 'weighted')!
+    const plan = await owner.post(`/api/households/${id}/plans/preview`, { cannerId: weighted.id, lines: [{ recipeId: 'usda-dried-beans-hot-pack', jarSizeId: 'pint-regular', jars: 7 }] })
+    expect(plan.status).toBe(200)
+    expect(plan.body.loads[0].pressurePsi).toBe(15)
+    expect((await owner.patch(`/api/households/${id}`, { altitudeFt: 2350 })).status).toBe(200)
   })
 
   it('answers 404 for another household, never revealing it exists', async () => {

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { ApiClient, startServer, type RunningServer } from '../support/server'
+import { ApiClient, expectField, startServer, type RunningServer } from '../support/server'
 
 let server: RunningServer
 let owner: ApiClient
@@ -116,22 +116,22 @@ describe('house recipes', () => {
   it('refuses a body that sets its own process minutes or pressure, naming the field', async () => {
     const minutes = await canner.post(`/api/households/${householdId}/recipes`, houseRecipe({ processMinutes: [{ jarKey: 'pint', minutes: 20 }] }))
     expect(minutes.status).toBe(400)
-    expect(minutes.body.message).toMatch(/^processMinutes: .*copied from the tested recipe/)
+    expectField(minutes, 'processMinutes', /copied from the tested recipe/)
     const pressure = await canner.post(`/api/households/${householdId}/recipes`, houseRecipe({ pressureBands: [{ gaugeType: 'dial', minFt: 0, maxFt: 8000, psi: 5 }] }))
     expect(pressure.status).toBe(400)
-    expect(pressure.body.message).toMatch(/^pressureBands: /)
+    expectField(pressure, 'pressureBands')
   })
 
   it('refuses a house recipe without a tested basis, with less than 1 in headspace, or an overfull fill', async () => {
     const noBasis = await canner.post(`/api/households/${householdId}/recipes`, houseRecipe({ basedOnRecipeId: 'house-dry-pack-beans' }))
     expect(noBasis.status).toBe(400)
-    expect(noBasis.body.message).toMatch(/^basedOnRecipeId: /)
+    expectField(noBasis, 'basedOnRecipeId')
     const shallow = await canner.post(`/api/households/${householdId}/recipes`, houseRecipe({ headspaceMm: 12.7 }))
     expect(shallow.status).toBe(400)
-    expect(shallow.body.message).toMatch(/^headspaceMm: .*at least 1 inch/)
+    expectField(shallow, 'headspaceMm', /at least 1 inch/)
     const overfull = await canner.post(`/api/households/${householdId}/recipes`, houseRecipe({ solidsFillFraction: 1.2 }))
     expect(overfull.status).toBe(400)
-    expect(overfull.body.message).toMatch(/^solidsFillFraction: /)
+    expectField(overfull, 'solidsFillFraction')
   })
 
   // Penn State Extension / NCHFP: a process time cannot be extended to a larger jar than was tested.
@@ -194,12 +194,12 @@ describe('canners', () => {
   it('refuses out-of-range measurements with 400 naming the field, in both units', async () => {
     const tiny = await owner.post(`/api/households/${householdId}/canners`, { ...newCanner, innerDiameterMm: 90 })
     expect(tiny.status).toBe(400)
-    expect(tiny.body.message).toMatch(/^innerDiameterMm: .*150 mm and 600 mm.*in\)/)
+    expectField(tiny, 'innerDiameterMm', /150 mm and 600 mm.*in\)/)
     const future = await owner.post(`/api/households/${householdId}/canners`, { ...newCanner, lastGaugeTestAt: '2099-01-01' })
     expect(future.status).toBe(400)
-    expect(future.body.message).toMatch(/^lastGaugeTestAt: /)
+    expectField(future, 'lastGaugeTestAt')
     const gauge = await owner.post(`/api/households/${householdId}/canners`, { ...newCanner, gaugeType: 'steam' })
-    expect(gauge.body.message).toMatch(/^gaugeType: /)
+    expectField(gauge, 'gaugeType')
   })
 })
 
@@ -227,12 +227,12 @@ describe('price list and empty jars owned', () => {
   it('refuses bad price items with 400 naming the field', async () => {
     const negative = await owner.post(`/api/households/${householdId}/prices`, { kind: 'salt', label: 'Salt', packageGrams: 737, priceCents: -5 })
     expect(negative.status).toBe(400)
-    expect(negative.body.message).toMatch(/^priceCents: A price cannot be negative/)
+    expectField(negative, 'priceCents', /A price cannot be negative/)
     const noBean = await owner.post(`/api/households/${householdId}/prices`, { kind: 'ingredient', label: 'Mystery', ingredientId: 'moon-beans', packageGrams: 500, priceCents: 100 })
     expect(noBean.status).toBe(400)
-    expect(noBean.body.message).toMatch(/^ingredientId: /)
+    expectField(noBean, 'ingredientId')
     const kind = await owner.post(`/api/households/${householdId}/prices`, { kind: 'canner', label: 'x', priceCents: 1 })
-    expect(kind.body.message).toMatch(/^kind: /)
+    expectField(kind, 'kind')
   })
 
   it('lists every jar size with the demo counts and lets only the owner set a count', async () => {
@@ -246,9 +246,9 @@ describe('price list and empty jars owned', () => {
     expect((await helper.get(`/api/households/${householdId}/jar-stock`)).body.find((s: { jarSizeId: string }) => s.jarSizeId === 'quart-wide').count).toBe(4)
     const bad = await owner.request('PUT', `/api/households/${householdId}/jar-stock`, { jarSizeId: 'quart-wide', count: 2.5 })
     expect(bad.status).toBe(400)
-    expect(bad.body.message).toMatch(/^count: /)
+    expectField(bad, 'count')
     const unknown = await owner.request('PUT', `/api/households/${householdId}/jar-stock`, { jarSizeId: 'gallon-jug', count: 1 })
-    expect(unknown.body.message).toMatch(/^jarSizeId: /)
+    expectField(unknown, 'jarSizeId')
     expect((await stranger.request('PUT', `/api/households/${householdId}/jar-stock`, { jarSizeId: 'quart-wide', count: 0 })).status).toBe(404)
   })
 })

@@ -9,7 +9,7 @@ import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { simpleParser } from 'mailparser'
 import { afterAll, describe, expect, it } from 'vitest'
-import { ApiClient, startServer, type RunningServer } from '../support/server'
+import { ApiClient, expectField, startServer, type RunningServer } from '../support/server'
 
 const H = 3_600_000
 const EMAIL = 'ansel@example.org'
@@ -144,7 +144,7 @@ describe('the Market list by e-mail', () => {
 
     const stranger = await client.post(`/api/households/${householdId}/plans/${saved.body.plan.id}/send-market-list`, { userId: '00000000-0000-4000-8000-000000000000' })
     expect(stranger.status).toBe(400)
-    expect(stranger.body.message).toMatch(/^userId:/)
+    expectField(stranger, 'userId')
   })
 })
 

@@ -1,7 +1,7 @@
 import convert from 'convert-units'
 import fc from 'fast-check'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { ApiClient, startServer, type RunningServer } from '../support/server'
+import { ApiClient, expectField, startServer, type RunningServer } from '../support/server'
 
 let server: RunningServer
 let canner: ApiClient
@@ -128,15 +128,15 @@ describe('plan preview', () => {
   it('answers 400 naming the field for bad bodies', async () => {
     const none = await preview(canner, { cannerId: tallCannerId, lines: [{ recipeId: 'house-dry-pack-beans', jarSizeId: 'pint-regular' }] })
     expect(none.status).toBe(400)
-    expect(none.body.message).toMatch(/^lines\.0\.jars: /)
+    expectField(none, 'lines.0.jars')
     const two = await preview(canner, { cannerId: tallCannerId, lines: [{ recipeId: 'house-dry-pack-beans', jarSizeId: 'pint-regular', jars: 3, dryGrams: 100 }] })
     expect(two.status).toBe(400)
     const negative = await preview(canner, { cannerId: tallCannerId, lines: [{ recipeId: 'house-dry-pack-beans', jarSizeId: 'pint-regular', jars: -2 }] })
     expect(negative.status).toBe(400)
-    expect(negative.body.message).toMatch(/^lines\.0\.jars: /)
+    expectField(negative, 'lines.0.jars')
     const noCanner = await preview(canner, { lines: [{ recipeId: 'house-dry-pack-beans', jarSizeId: 'pint-regular', jars: 3 }] })
     expect(noCanner.status).toBe(400)
-    expect(noCanner.body.message).toMatch(/^cannerId: /)
+    expectField(noCanner, 'cannerId')
   })
 
   it('refuses unknown recipes and other households\' canners with 422 naming the field', async () => {

@@ -1,3 +1,4 @@
+import { expect } from 'vitest'
 import { spawn, type ChildProcess } from 'node:child_process'
 import { mkdtempSync } from 'node:fs'
 import { createServer } from 'node:net'
@@ -99,4 +100,15 @@ export class ApiClient {
     if (res.status !== 200) throw new Error(`login failed for ${email}: ${res.status} ${JSON.stringify(res.body)}`)
     return res.body as { user: { id: string }, households: Array<{ id: string, name: string, role: string }> }
   }
+}
+
+/**
+ * An error answer in the API's envelope that names `field`: the field in `data.field`, and a
+ * message for a person (never starting with the field path), matching `pattern` when given.
+ */
+export function expectField(res: { body: any }, field: string, pattern?: RegExp) { // eslint-disable-line @typescript-eslint/no-explicit-any -- test JSON
+  expect(res.body.data?.field, JSON.stringify(res.body)).toBe(field)
+  expect(res.body.message).not.toMatch(new RegExp(`^${field.replace(/\./g, '\\.')}:`))
+  expect(res.body.message).not.toMatch(/^(Expected|Required|Invalid|String must|Number must)/)
+  if (pattern) expect(res.body.message).toMatch(pattern)
 }

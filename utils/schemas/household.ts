@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { numberField } from './fields'
 
 export const roleRank = { helper: 1, canner: 2, owner: 3 } as const
 export type HouseholdRole = keyof typeof roleRank
@@ -9,14 +10,21 @@ export const HouseholdParamsSchema = z.object({
 
 /** Highest inhabited land is below 30,000 ft; anything beyond is a typing slip. */
 export const HouseholdSettingsSchema = z.object({
-  name: z.string().trim().min(1, 'Name the household.').max(80),
-  altitudeFt: z.coerce.number({ invalid_type_error: 'Enter the altitude in feet.' }).int('Enter whole feet.').min(-1500, 'Altitude looks too low.').max(30000, 'Altitude looks too high.'),
+  name: z.string({ invalid_type_error: 'Name the household.' }).trim().min(1, 'Name the household.').max(80, 'Keep the household name under 80 characters.'),
+  altitudeFt: numberField('Enter the altitude of your kitchen in feet; the canner pressure depends on it.', {
+    whole: true,
+    fraction: 'Enter the altitude in whole feet.',
+    min: -1500,
+    low: 'An altitude below -1,500 ft is lower than any inhabited place; check the number.',
+    max: 30_000,
+    high: 'An altitude above 30,000 ft is higher than any inhabited place; check the number.',
+  }),
   unitSystem: z.enum(['us', 'metric'], { errorMap: () => ({ message: 'Choose US customary or metric.' }) }),
-  storeCanPriceCents: z.coerce.number().int().min(0, 'A price cannot be negative.').max(100_000),
-  jarUses: z.coerce.number().int().min(1, 'A jar is used at least once.').max(100),
-  coolDownPintMinutes: z.coerce.number().int().min(10, 'Natural cool-down takes at least 10 minutes.').max(180),
-  coolDownQuartMinutes: z.coerce.number().int().min(10, 'Natural cool-down takes at least 10 minutes.').max(180),
-  bestByMonths: z.coerce.number().int().min(1).max(36),
+  storeCanPriceCents: numberField('Enter the price of one store-bought can.', { whole: true, fraction: 'Enter the price to the cent.', min: 0, low: 'A price cannot be negative.', max: 100_000, high: 'Enter the price of one can (at most 1,000).' }),
+  jarUses: numberField('Enter how many seasons a jar lasts.', { whole: true, min: 1, low: 'A jar is used at least once.', max: 100, high: 'A jar does not last more than 100 seasons.' }),
+  coolDownPintMinutes: numberField('Enter the cool-down minutes for pints.', { whole: true, min: 10, low: 'Natural cool-down takes at least 10 minutes.', max: 180, high: 'Natural cool-down takes less than 3 hours.' }),
+  coolDownQuartMinutes: numberField('Enter the cool-down minutes for quarts.', { whole: true, min: 10, low: 'Natural cool-down takes at least 10 minutes.', max: 180, high: 'Natural cool-down takes less than 3 hours.' }),
+  bestByMonths: numberField('Enter the months until best-by.', { whole: true, min: 1, low: 'Best-by is at least 1 month after canning.', max: 36, high: 'Best-by is at most 36 months after canning.' }),
 }).partial()
 
 export type HouseholdSettingsInput = z.infer<typeof HouseholdSettingsSchema>

@@ -1,5 +1,6 @@
 /** Schemas of the Logbook and the seal check, shared by the API routes and the forms. */
 import { z } from 'zod'
+import { queryWholeNumber } from './fields'
 
 const uuid = (what: string) => z.string({ required_error: `Choose the ${what}.`, invalid_type_error: `Choose the ${what}.` }).uuid(`That ${what} id is not valid.`)
 const ISO_DATE_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:\d{2})$/
@@ -71,8 +72,8 @@ const SORT = new RegExp(`^-?(${loadSortKeys.join('|')})$`)
 const dateOnly = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Give the date as YYYY-MM-DD.').refine(s => !Number.isNaN(Date.parse(s)), 'That date does not exist.')
 
 export const LoadListQuerySchema = z.object({
-  page: z.coerce.number({ invalid_type_error: 'page must be a number.' }).int('page must be a whole number.').min(1, 'page starts at 1.').max(10_000).default(1),
-  pageSize: z.coerce.number({ invalid_type_error: 'pageSize must be a number.' }).int().min(1, 'pageSize must be between 1 and 100.').max(100, 'pageSize must be between 1 and 100.').default(20),
+  page: queryWholeNumber('Give the page as a whole number from 1.', 1, 10_000).default('1'),
+  pageSize: queryWholeNumber('Give between 1 and 100 loads a page.', 1, 100).default('20'),
   sort: z.string().regex(SORT, `Sort by one of ${loadSortKeys.join(', ')}, with a leading "-" for newest or largest first.`).default('-startedAt'),
   recipeId: z.string().min(1).max(120).optional(),
   cannerId: z.string().uuid('That canner id is not valid.').optional(),

@@ -1,4 +1,4 @@
 export default defineEventHandler(async (event) => {
-  const { user } = await requireUserSession(event, { message: 'Please sign in.' })
+  const user = await requireSession(event)
   return { user, households: await householdsOf(user.id) }
 })

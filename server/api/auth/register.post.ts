@@ -3,12 +3,12 @@ import { RegisterSchema } from '../../../utils/schemas/auth'
 
 /** Create an account and its household; the new user is the household's owner and is signed in. */
 export default defineEventHandler(async (event) => {
-  const body = await readValidatedBody(event, validateWith(RegisterSchema))
+  const body = await validBody(event, RegisterSchema)
   const db = await useDB()
   const [existing] = await db.select({ id: tables.users.id }).from(tables.users)
     .where(sql`lower(${tables.users.email}) = ${body.email}`)
   if (existing) {
-    throw createError({ statusCode: 409, message: 'An account with that e-mail already exists. Sign in instead.' })
+    conflict('An account with that e-mail already exists. Sign in instead.')
   }
   const passwordHash = await hashPassword(body.password)
   const user = await db.transaction(async (tx) => {
@@ -21,7 +21,7 @@ export default defineEventHandler(async (event) => {
     return created!
   }).catch((error: unknown) => {
     const code = (error as { code?: string, cause?: { code?: string } }).code ?? (error as { cause?: { code?: string } }).cause?.code
-    if (code === '23505') throw createError({ statusCode: 409, message: 'An account with that e-mail already exists. Sign in instead.' })
+    if (code === '23505') conflict('An account with that e-mail already exists. Sign in instead.')
     throw error
   })
   await setUserSession(event, { user: { id: user.id, email: user.email, name: user.name, isAdmin: user.isAdmin } })

@@ -9,8 +9,8 @@ const BodySchema = z.object({
  * or development), e.g. to see a seal check fall due the next day.
  */
 export default defineEventHandler(async (event) => {
-  if (!clockAdjustable()) throw createError({ statusCode: 404, message: 'Not found.' })
-  const body = await readValidatedBody(event, validateWith(BodySchema))
+  if (!clockAdjustable()) notFound('Not found.')
+  const body = await validBody(event, BodySchema)
   setClockOffset(body.offsetMs)
   return { now: serverNow(), offsetMs: clockOffsetMs() }
 })

@@ -5,8 +5,8 @@ import { desc } from 'drizzle-orm'
  * a 404 unless the fake is running (SHELFSTEAD_MAIL=fake or its default). Needs a signed-in user.
  */
 export default defineEventHandler(async (event) => {
-  if (!fakeMailRunning()) throw createError({ statusCode: 404, message: 'Not found.' })
-  await requireUserSession(event, { message: 'Please sign in.' })
+  if (!fakeMailRunning()) notFound('Not found.')
+  await requireSession(event)
   const db = await useDB()
   return db.select({
     id: tables.mailOutbox.id,

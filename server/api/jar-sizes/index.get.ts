@@ -2,7 +2,7 @@ import { asc } from 'drizzle-orm'
 
 /** The jar catalogue, smallest first. Outside dimensions are typical values (see dimensionsNote). */
 export default defineEventHandler(async (event) => {
-  await requireUserSession(event, { message: 'Please sign in.' })
+  await requireSession(event)
   const db = await useDB()
   return db.select({
     id: tables.jarSizes.id,

@@ -5,12 +5,13 @@ import { HouseholdQuerySchema, RecipeParamsSchema } from '../../../utils/schemas
  * their sources. Another household's house recipe is a 404, like one that does not exist.
  */
 export default defineEventHandler(async (event) => {
-  const { id } = await getValidatedRouterParams(event, validateWith(RecipeParamsSchema))
-  const { householdId } = await getValidatedQuery(event, validateWith(HouseholdQuerySchema))
-  const { db } = await requireHouseholdRole(event, householdId, 'helper')
+  await requireSession(event)
+  const { id } = validParams(event, RecipeParamsSchema)
+  const { householdId } = validQuery(event, HouseholdQuerySchema)
+  const { db } = await requireMembership(event, householdId, 'helper')
   const { recipes, ingredients } = await loadCatalogue(db, householdId)
   const recipe = recipes.find(r => r.id === id)
-  if (!recipe) throw createError({ statusCode: 404, message: 'That recipe is not in your Recipe book.' })
+  if (!recipe) notFound('That recipe is not in your Recipe book.')
   const basedOn = recipes.find(r => r.id === recipe.basedOnRecipeId)
   return {
     ...recipe,

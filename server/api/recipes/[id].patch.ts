@@ -6,14 +6,14 @@ import { RecipeParamsSchema, SharedRecipePatchSchema } from '../../../utils/sche
  * not editable here: they come from the published tables in the reference seed.
  */
 export default defineEventHandler(async (event) => {
-  const { id } = await getValidatedRouterParams(event, validateWith(RecipeParamsSchema))
-  const body = await readValidatedBody(event, validateWith(SharedRecipePatchSchema))
   await requireAdmin(event)
+  const { id } = validParams(event, RecipeParamsSchema)
+  const body = await validBody(event, SharedRecipePatchSchema)
   const db = await useDB()
   const [recipe] = await db.update(tables.recipes)
     .set({ ...body, updatedAt: new Date() })
     .where(and(eq(tables.recipes.id, id), isNull(tables.recipes.householdId)))
     .returning()
-  if (!recipe) throw createError({ statusCode: 404, message: 'No such shared recipe.' })
+  if (!recipe) notFound('No such shared recipe.')
   return recipe
 })

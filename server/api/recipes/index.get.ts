@@ -2,8 +2,9 @@ import { HouseholdQuerySchema } from '../../../utils/schemas/catalogue'
 
 /** The Recipe book: shared recipes (tested ones first) and the household's house recipes. */
 export default defineEventHandler(async (event) => {
-  const { householdId } = await getValidatedQuery(event, validateWith(HouseholdQuerySchema))
-  const { db } = await requireHouseholdRole(event, householdId, 'helper')
+  await requireSession(event)
+  const { householdId } = validQuery(event, HouseholdQuerySchema)
+  const { db } = await requireMembership(event, householdId, 'helper')
   const { recipes, ingredients } = await loadCatalogue(db, householdId)
   return recipes.map((recipe) => {
     const basedOn = recipes.find(r => r.id === recipe.basedOnRecipeId)

@@ -2,9 +2,8 @@ import { eq } from 'drizzle-orm'
 import { HouseholdParamsSchema } from '../../../../utils/schemas/household'
 
 export default defineEventHandler(async (event) => {
-  const { id } = await getValidatedRouterParams(event, validateWith(HouseholdParamsSchema))
-  const { db, role } = await requireHouseholdRole(event, id, 'helper')
+  const { params: { id }, db, role } = await requireHouseholdRole(event, HouseholdParamsSchema, 'helper')
   const [household] = await db.select().from(tables.households).where(eq(tables.households.id, id))
-  if (!household) throw createError({ statusCode: 404, message: 'No such household.' })
+  if (!household) notFound('No such household.')
   return { ...household, role }
 })

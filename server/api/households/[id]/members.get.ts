@@ -2,8 +2,7 @@ import { eq } from 'drizzle-orm'
 import { HouseholdParamsSchema } from '../../../../utils/schemas/household'
 
 export default defineEventHandler(async (event) => {
-  const { id } = await getValidatedRouterParams(event, validateWith(HouseholdParamsSchema))
-  const { db } = await requireHouseholdRole(event, id, 'helper')
+  const { params: { id }, db } = await requireHouseholdRole(event, HouseholdParamsSchema, 'helper')
   return db.select({
     userId: tables.users.id,
     name: tables.users.name,

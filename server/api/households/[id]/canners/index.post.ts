@@ -2,9 +2,8 @@ import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
 import { CannerSchema, withGaugeStatus } from '../../../../../utils/schemas/catalogue'
 
 export default defineEventHandler(async (event) => {
-  const { id } = await getValidatedRouterParams(event, validateWith(HouseholdParamsSchema))
-  const body = await readValidatedBody(event, validateWith(CannerSchema))
-  const { db } = await requireHouseholdRole(event, id, 'owner')
+  const { params: { id }, db } = await requireHouseholdRole(event, HouseholdParamsSchema, 'owner')
+  const body = await validBody(event, CannerSchema)
   const [canner] = await db.insert(tables.canners).values({ ...body, householdId: id }).returning()
   setResponseStatus(event, 201)
   return withGaugeStatus(canner!)

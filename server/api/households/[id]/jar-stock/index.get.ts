@@ -3,8 +3,7 @@ import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
 
 /** Empty jars the household owns, one row per jar size in the catalogue (0 when none). */
 export default defineEventHandler(async (event) => {
-  const { id } = await getValidatedRouterParams(event, validateWith(HouseholdParamsSchema))
-  const { db } = await requireHouseholdRole(event, id, 'helper')
+  const { params: { id }, db } = await requireHouseholdRole(event, HouseholdParamsSchema, 'helper')
   const [sizes, stock] = await Promise.all([
     db.select().from(tables.jarSizes).orderBy(asc(tables.jarSizes.sortOrder)),
     db.select().from(tables.jarStock).where(eq(tables.jarStock.householdId, id)),

@@ -5,9 +5,8 @@ import { LoadListQuerySchema } from '../../../../../utils/schemas/logbook'
 
 /** The Logbook as CSV, one row per load line, with the same filters as the list (any member). */
 export default defineEventHandler(async (event) => {
-  const { id } = await getValidatedRouterParams(event, validateWith(HouseholdParamsSchema))
-  const query = await getValidatedQuery(event, validateWith(LoadListQuerySchema))
-  const { db } = await requireHouseholdRole(event, id, 'helper')
+  const { params: { id }, db } = await requireHouseholdRole(event, HouseholdParamsSchema, 'helper')
+  const query = validQuery(event, LoadListQuerySchema)
   const rows = await loadsForExport(db, id, query)
   setResponseHeaders(event, { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': 'attachment; filename="shelfstead-logbook.csv"' })
   return stringify(rows.map(({ load, line }) => ({

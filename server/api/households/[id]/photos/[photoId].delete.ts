@@ -1,8 +1,7 @@
 import { HouseholdPhotoParamsSchema } from '../../../../../utils/schemas/logbook'
 
 export default defineEventHandler(async (event) => {
-  const { id, photoId } = await getValidatedRouterParams(event, validateWith(HouseholdPhotoParamsSchema))
-  const { db } = await requireHouseholdRole(event, id, 'canner')
+  const { params: { id, photoId }, db } = await requireHouseholdRole(event, HouseholdPhotoParamsSchema, 'canner')
   await deletePhoto(db, id, photoId)
   setResponseStatus(event, 204)
   return null

@@ -2,8 +2,7 @@ import { HouseholdPhotoParamsSchema } from '../../../../../utils/schemas/logbook
 
 /** A load photo, for members of its household only; another household's photo is a 404. */
 export default defineEventHandler(async (event) => {
-  const { id, photoId } = await getValidatedRouterParams(event, validateWith(HouseholdPhotoParamsSchema))
-  const { db } = await requireHouseholdRole(event, id, 'helper')
+  const { params: { id, photoId }, db } = await requireHouseholdRole(event, HouseholdPhotoParamsSchema, 'helper')
   const { photo, data } = await readPhoto(db, id, photoId)
   setResponseHeaders(event, {
     'content-type': photo.contentType,

@@ -3,9 +3,8 @@ import { PlanSaveSchema } from '../../../../../utils/schemas/plan'
 
 /** Save a plan (canner and up). A plan the model refuses is not saved: 422 with the reason. */
 export default defineEventHandler(async (event) => {
-  const { id } = await getValidatedRouterParams(event, validateWith(HouseholdParamsSchema))
-  const body = await readValidatedBody(event, validateWith(PlanSaveSchema))
-  const { db, user } = await requireHouseholdRole(event, id, 'canner')
+  const { params: { id }, db, user } = await requireHouseholdRole(event, HouseholdParamsSchema, 'canner')
+  const body = await validBody(event, PlanSaveSchema)
   const result = await computePlan(db, id, body.request)
   const [plan] = await db.insert(tables.plans).values({
     householdId: id,

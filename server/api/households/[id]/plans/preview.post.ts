@@ -3,8 +3,7 @@ import { PlanRequestSchema } from '../../../../../utils/schemas/plan'
 
 /** Compute a plan without saving it. Any member may preview; a refusal answers 422. */
 export default defineEventHandler(async (event) => {
-  const { id } = await getValidatedRouterParams(event, validateWith(HouseholdParamsSchema))
-  const body = await readValidatedBody(event, validateWith(PlanRequestSchema))
-  const { db } = await requireHouseholdRole(event, id, 'helper')
+  const { params: { id }, db } = await requireHouseholdRole(event, HouseholdParamsSchema, 'helper')
+  const body = await validBody(event, PlanRequestSchema)
   return computePlan(db, id, body)
 })

@@ -3,8 +3,7 @@ import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
 
 /** The household's price list: what it pays for each package it buys. */
 export default defineEventHandler(async (event) => {
-  const { id } = await getValidatedRouterParams(event, validateWith(HouseholdParamsSchema))
-  const { db } = await requireHouseholdRole(event, id, 'helper')
+  const { params: { id }, db } = await requireHouseholdRole(event, HouseholdParamsSchema, 'helper')
   return db.select().from(tables.priceItems)
     .where(eq(tables.priceItems.householdId, id))
     .orderBy(asc(tables.priceItems.kind), asc(tables.priceItems.label))

@@ -3,11 +3,10 @@ import { HouseRecipeParamsSchema } from '../../../../../utils/schemas/catalogue'
 
 /** Remove a house recipe of this household (its jar specs and bands go with it). */
 export default defineEventHandler(async (event) => {
-  const { id, recipeId } = await getValidatedRouterParams(event, validateWith(HouseRecipeParamsSchema))
-  const { db } = await requireHouseholdRole(event, id, 'canner')
+  const { params: { id, recipeId }, db } = await requireHouseholdRole(event, HouseRecipeParamsSchema, 'canner')
   const [deleted] = await db.delete(tables.recipes)
     .where(and(eq(tables.recipes.id, recipeId), eq(tables.recipes.householdId, id)))
     .returning({ id: tables.recipes.id })
-  if (!deleted) throw createError({ statusCode: 404, message: 'No such house recipe in this household.' })
+  if (!deleted) notFound('No such house recipe in this household.')
   return { id: deleted.id, deleted: true }
 })

@@ -6,17 +6,17 @@ import { HouseRecipeParamsSchema, HouseRecipeSchema, houseRecipeRow, houseRecipe
  * recipe it names, so a change of basis takes that recipe's times and pressures.
  */
 export default defineEventHandler(async (event) => {
-  const { id, recipeId } = await getValidatedRouterParams(event, validateWith(HouseRecipeParamsSchema))
-  const body = await readValidatedBody(event, validateWith(HouseRecipeSchema))
-  const { db } = await requireHouseholdRole(event, id, 'canner')
+  const { params: { id, recipeId }, db } = await requireHouseholdRole(event, HouseRecipeParamsSchema, 'canner')
+  const body = await validBody(event, HouseRecipeSchema)
   const catalogue = await loadCatalogue(db, id)
   if (!catalogue.recipes.some(r => r.id === recipeId && r.householdId === id)) {
-    throw createError({ statusCode: 404, message: 'No such house recipe in this household.' })
+    notFound('No such house recipe in this household.')
   }
   const built = houseRecipeTables(body, catalogue)
   if ('issues' in built) {
     const [first] = built.issues
-    throw createError({ statusCode: built.status, message: built.status === 400 ? `${first!.field}: ${first!.message}` : first!.message, data: { issues: built.issues } })
+    if (built.status === 400) badInput(first!.field, first!.message, built.issues)
+    refusal(first!.message, first!.field)
   }
   await db.transaction(async (tx) => {
     await tx.update(tables.recipes).set({ ...houseRecipeRow(body, built.base), updatedAt: new Date() }).where(eq(tables.recipes.id, recipeId))

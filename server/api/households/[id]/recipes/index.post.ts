@@ -7,13 +7,13 @@ import { HouseRecipeSchema, houseRecipeRow, houseRecipeTables } from '../../../.
  * untested caution and the process table of the tested recipe it names as its basis.
  */
 export default defineEventHandler(async (event) => {
-  const { id } = await getValidatedRouterParams(event, validateWith(HouseholdParamsSchema))
-  const body = await readValidatedBody(event, validateWith(HouseRecipeSchema))
-  const { db, user } = await requireHouseholdRole(event, id, 'canner')
+  const { params: { id }, db, user } = await requireHouseholdRole(event, HouseholdParamsSchema, 'canner')
+  const body = await validBody(event, HouseRecipeSchema)
   const built = houseRecipeTables(body, await loadCatalogue(db, id))
   if ('issues' in built) {
     const [first] = built.issues
-    throw createError({ statusCode: built.status, message: built.status === 400 ? `${first!.field}: ${first!.message}` : first!.message, data: { issues: built.issues } })
+    if (built.status === 400) badInput(first!.field, first!.message, built.issues)
+    refusal(first!.message, first!.field)
   }
   const recipeId = `house-${randomUUID()}`
   await db.transaction(async (tx) => {

@@ -3,9 +3,8 @@ import { LabelQuerySchema } from '../../../../../utils/schemas/shelf'
 
 /** The jar labels to print: ?lots=<id,id> (default the whole Shelf), one label per jar left (any member). */
 export default defineEventHandler(async (event) => {
-  const { id } = await getValidatedRouterParams(event, validateWith(HouseholdParamsSchema))
-  const query = await getValidatedQuery(event, validateWith(LabelQuerySchema))
-  const { db } = await requireHouseholdRole(event, id, 'helper')
+  const { params: { id }, db } = await requireHouseholdRole(event, HouseholdParamsSchema, 'helper')
+  const query = validQuery(event, LabelQuerySchema)
   const ids = query.lots ? query.lots.split(',').map(s => s.trim()).filter(Boolean) : null
   return { layout: query.layout, lots: await labelLots(db, id, ids) }
 })

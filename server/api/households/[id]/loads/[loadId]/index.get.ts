@@ -2,7 +2,6 @@ import { HouseholdLoadParamsSchema } from '../../../../../../utils/schemas/logbo
 
 /** One load with its lines, seal check, photos and reprocessing links (any member). */
 export default defineEventHandler(async (event) => {
-  const { id, loadId } = await getValidatedRouterParams(event, validateWith(HouseholdLoadParamsSchema))
-  const { db } = await requireHouseholdRole(event, id, 'helper')
+  const { params: { id, loadId }, db } = await requireHouseholdRole(event, HouseholdLoadParamsSchema, 'helper')
   return loadDetail(db, id, loadId)
 })

@@ -2,8 +2,7 @@ import { HouseholdLoadParamsSchema, LoadUpdateSchema } from '../../../../../../u
 
 /** Record how a pending reprocessing load was run, or change a load's notes (canner and up). */
 export default defineEventHandler(async (event) => {
-  const { id, loadId } = await getValidatedRouterParams(event, validateWith(HouseholdLoadParamsSchema))
-  const body = await readValidatedBody(event, validateWith(LoadUpdateSchema))
-  const { db } = await requireHouseholdRole(event, id, 'canner')
+  const { params: { id, loadId }, db } = await requireHouseholdRole(event, HouseholdLoadParamsSchema, 'canner')
+  const body = await validBody(event, LoadUpdateSchema)
   return updateLoad(db, id, loadId, body)
 })

@@ -5,14 +5,13 @@ import { HouseholdLoadParamsSchema } from '../../../../../../utils/schemas/logbo
  * content (magic bytes), at most 8 MB.
  */
 export default defineEventHandler(async (event) => {
-  const { id, loadId } = await getValidatedRouterParams(event, validateWith(HouseholdLoadParamsSchema))
-  const { db, user } = await requireHouseholdRole(event, id, 'canner')
+  const { params: { id, loadId }, db, user } = await requireHouseholdRole(event, HouseholdLoadParamsSchema, 'canner')
   const declared = Number(getRequestHeader(event, 'content-length') ?? 0)
-  if (declared > MAX_PHOTO_BYTES + 64 * 1024) throw createError({ statusCode: 413, message: 'That photo is larger than 8 MB. Send a smaller one (phones can share a reduced size).' })
+  if (declared > MAX_PHOTO_BYTES + 64 * 1024) tooLarge('That photo is larger than 8 MB. Send a smaller one (phones can share a reduced size).', 'photo')
   await requireLoad(db, id, loadId)
   const parts = await readMultipartFormData(event)
   const file = parts?.find(p => p.name === 'photo' && p.filename !== undefined)
-  if (!file) throw createError({ statusCode: 400, message: 'photo: Choose a photo to upload.', data: { issues: [{ field: 'photo', message: 'Choose a photo to upload.' }] } })
+  if (!file) badInput('photo', 'Choose a photo to upload.')
   const photo = await savePhoto(db, { householdId: id, loadId, userId: user.id, bytes: file.data, name: file.filename ?? '' })
   setResponseStatus(event, 201)
   return photo

@@ -1,8 +1,7 @@
 import { HouseholdPlanParamsSchema } from '../../../../../../utils/schemas/params'
 
 export default defineEventHandler(async (event) => {
-  const { id, planId } = await getValidatedRouterParams(event, validateWith(HouseholdPlanParamsSchema))
-  const { db, user } = await requireHouseholdRole(event, id, 'canner')
+  const { params: { id, planId }, db, user } = await requireHouseholdRole(event, HouseholdPlanParamsSchema, 'canner')
   const source = await requirePlan(db, id, planId)
   const [plan] = await db.insert(tables.plans).values({
     householdId: id,

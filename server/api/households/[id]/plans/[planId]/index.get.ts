@@ -5,8 +5,7 @@ import { HouseholdPlanParamsSchema } from '../../../../../../utils/schemas/param
  * If the current data make the model refuse it, the plan still loads with the refusal.
  */
 export default defineEventHandler(async (event) => {
-  const { id, planId } = await getValidatedRouterParams(event, validateWith(HouseholdPlanParamsSchema))
-  const { db } = await requireHouseholdRole(event, id, 'helper')
+  const { params: { id, planId }, db } = await requireHouseholdRole(event, HouseholdPlanParamsSchema, 'helper')
   const plan = await requirePlan(db, id, planId)
   try {
     return { plan, result: await computePlan(db, id, plan.request), refusal: null }

@@ -4,9 +4,8 @@ import { PlanUpdateSchema } from '../../../../../../utils/schemas/plan'
 
 /** Rename a plan, change its status, or replace its request (recomputed; a refusal saves nothing). */
 export default defineEventHandler(async (event) => {
-  const { id, planId } = await getValidatedRouterParams(event, validateWith(HouseholdPlanParamsSchema))
-  const body = await readValidatedBody(event, validateWith(PlanUpdateSchema))
-  const { db } = await requireHouseholdRole(event, id, 'canner')
+  const { params: { id, planId }, db } = await requireHouseholdRole(event, HouseholdPlanParamsSchema, 'canner')
+  const body = await validBody(event, PlanUpdateSchema)
   const current = await requirePlan(db, id, planId)
   // Only a new request is recomputed (and refused with 422); renaming never depends on today's data.
   const result = body.request ? await computePlan(db, id, body.request) : null

@@ -3,8 +3,7 @@ import { HouseholdPlanParamsSchema } from '../../../../../../../utils/schemas/pa
 
 /** Who checked off what on this plan's market list. */
 export default defineEventHandler(async (event) => {
-  const { id, planId } = await getValidatedRouterParams(event, validateWith(HouseholdPlanParamsSchema))
-  const { db } = await requireHouseholdRole(event, id, 'helper')
+  const { params: { id, planId }, db } = await requireHouseholdRole(event, HouseholdPlanParamsSchema, 'helper')
   await requirePlan(db, id, planId)
   return db.select({ itemKey: tables.marketChecks.itemKey, checkedAt: tables.marketChecks.checkedAt, checkedBy: tables.users.name })
     .from(tables.marketChecks)

@@ -4,9 +4,8 @@ import { HouseholdPlanParamsSchema } from '../../../../../../../utils/schemas/pa
 
 /** Check an item off (or back on) for every member. Any member may do it, helpers included. */
 export default defineEventHandler(async (event) => {
-  const { id, planId } = await getValidatedRouterParams(event, validateWith(HouseholdPlanParamsSchema))
-  const body = await readValidatedBody(event, validateWith(MarketCheckSchema))
-  const { db, user } = await requireHouseholdRole(event, id, 'helper')
+  const { params: { id, planId }, db, user } = await requireHouseholdRole(event, HouseholdPlanParamsSchema, 'helper')
+  const body = await validBody(event, MarketCheckSchema)
   await requirePlan(db, id, planId)
   if (body.checked) {
     await db.insert(tables.marketChecks)

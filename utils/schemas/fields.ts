@@ -1,0 +1,38 @@
+/**
+ * Field builders shared by every schema. Numbers are never coerced: an empty, blank or
+ * malformed value ("", " ", null, false, [], "0x1F40") is refused with the field's own message,
+ * never read as 0 or as some other number, because the planner's pressure and times come from
+ * these values.
+ */
+import { z } from 'zod'
+
+interface NumberLimits {
+  min?: number
+  max?: number
+  /** The message when below `min` (or at `min` when `above`). */
+  low?: string
+  high?: string
+  /** Strictly more than `min`. */
+  above?: boolean
+  whole?: boolean
+  /** The message for a fraction when `whole`. */
+  fraction?: string
+}
+
+/** A JSON number, required, with one message for "missing or not a number" and one per limit. */
+export function numberField(message: string, limits: NumberLimits = {}) {
+  let field = z.number({ required_error: message, invalid_type_error: message })
+  if (limits.whole) field = field.int(limits.fraction ?? message)
+  if (limits.min !== undefined) field = limits.above ? field.gt(limits.min, limits.low ?? message) : field.min(limits.min, limits.low ?? message)
+  if (limits.max !== undefined) field = field.max(limits.max, limits.high ?? message)
+  return field
+}
+
+/** A whole number in the query string ("?page=2"): digits only, then the same limits. */
+export function queryWholeNumber(message: string, min: number, max: number) {
+  return z.string({ invalid_type_error: message })
+    .trim()
+    .regex(/^\d+$/, message)
+    .transform(Number)
+    .pipe(z.number().int(message).min(min, message).max(max, message))
+}
