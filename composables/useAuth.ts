@@ -1,3 +1,5 @@
+import type { LoginInput, RegisterInput } from '~/utils/schemas/auth'
+import { dataKeys } from '~/utils/dataKeys'
 import type { HouseholdRole } from '~/utils/schemas/household'
 import { roleRank } from '~/utils/schemas/household'
 
@@ -15,7 +17,7 @@ export function useAuth() {
   const store = useHouseholdStore()
   const requestFetch = useRequestFetch()
   const { data: me, refresh } = useAsyncData<MeResponse | null>(
-    'auth-me',
+    dataKeys.me,
     () => (session.loggedIn.value ? requestFetch<MeResponse>('/api/auth/me') : Promise.resolve(null)),
     { watch: [session.loggedIn] },
   )
@@ -30,6 +32,16 @@ export function useAuth() {
   async function signedIn() {
     await session.fetch()
     await refresh()
+  }
+
+  async function signIn(values: LoginInput) {
+    await $fetch('/api/auth/login', { method: 'POST', body: values })
+    await signedIn()
+  }
+
+  async function register(values: RegisterInput) {
+    await $fetch('/api/auth/register', { method: 'POST', body: values })
+    await signedIn()
   }
 
   async function logout() {
@@ -47,7 +59,8 @@ export function useAuth() {
     activeId: computed(() => active.value?.id ?? null),
     select: store.select,
     can,
-    signedIn,
+    signIn,
+    register,
     refresh,
     logout,
   }

@@ -15,18 +15,15 @@ import {
   type AnyPgColumn,
 } from 'drizzle-orm/pg-core'
 import type { PlanRequestBody } from '../../utils/schemas/plan'
+import {
+  fillBases, gaugeTypes, imageTypes, ingredientForms, jarMouths, loadStatuses, packStyles, planStatuses, priceKinds,
+  recipeStatuses, reminderKinds, roles, shelfSources, unitSystems, unsealedActions,
+} from '../../utils/vocabulary'
 
 const timestamps = {
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
 }
-
-export const roles = ['helper', 'canner', 'owner'] as const
-export type Role = (typeof roles)[number]
-export const gaugeTypes = ['dial', 'weighted'] as const
-export type GaugeType = (typeof gaugeTypes)[number]
-export const unitSystems = ['us', 'metric'] as const
-export type UnitSystem = (typeof unitSystems)[number]
 
 // ---------------------------------------------------------------------------
 // People and households
@@ -52,6 +49,8 @@ export const households = pgTable('households', {
   coolDownPintMinutes: integer('cool_down_pint_minutes').notNull().default(30),
   coolDownQuartMinutes: integer('cool_down_quart_minutes').notNull().default(45),
   bestByMonths: integer('best_by_months').notNull().default(12),
+  /** IANA time zone the household's dates and times are read in ("America/Denver"). */
+  timeZone: text('time_zone').notNull().default('UTC'),
   isDemo: boolean('is_demo').notNull().default(false),
   ...timestamps,
 })
@@ -80,7 +79,7 @@ export const jarSizes = pgTable('jar_sizes', {
   heightMm: doublePrecision('height_mm').notNull(),
   /** Outside dimensions are not published by any agency: typical values, editable. */
   dimensionsNote: text('dimensions_note').notNull(),
-  mouth: text('mouth', { enum: ['regular', 'wide'] }).notNull(),
+  mouth: text('mouth', { enum: jarMouths }).notNull(),
   sortOrder: integer('sort_order').notNull().default(0),
 })
 
@@ -88,7 +87,7 @@ export const ingredients = pgTable('ingredients', {
   id: text('id').primaryKey(),
   name: text('name').notNull(),
   /** 'dry' legumes are measured by the cup and swell; 'fresh' ones are bought by weight in the pod. */
-  form: text('form', { enum: ['dry', 'fresh'] }).notNull().default('dry'),
+  form: text('form', { enum: ingredientForms }).notNull().default('dry'),
   gramsPerCup: doublePrecision('grams_per_cup').notNull(),
   gramsPerCupSource: text('grams_per_cup_source').notNull(),
   /** Hydrated volume / dry volume. */
@@ -101,14 +100,14 @@ export const recipes = pgTable('recipes', {
   /** Null for the shared library of tested recipes; set for a household's house recipe. */
   householdId: uuid('household_id').references(() => households.id, { onDelete: 'cascade' }),
   name: text('name').notNull(),
-  status: text('status', { enum: ['tested', 'house'] }).notNull(),
-  packStyle: text('pack_style', { enum: ['hot', 'raw', 'dry'] }).notNull(),
+  status: text('status', { enum: recipeStatuses }).notNull(),
+  packStyle: text('pack_style', { enum: packStyles }).notNull(),
   ingredientId: text('ingredient_id').notNull().references(() => ingredients.id),
   headspaceMm: doublePrecision('headspace_mm').notNull(),
   /** Largest fraction of the jar the hydrated solids may take. */
   solidsFillFraction: doublePrecision('solids_fill_fraction').notNull(),
   /** 'published': per-jar dry amount from the recipe; 'cap': the dry-pack fill cap. */
-  fillBasis: text('fill_basis', { enum: ['cap', 'published'] }).notNull(),
+  fillBasis: text('fill_basis', { enum: fillBases }).notNull(),
   summary: text('summary').notNull().default(''),
   steps: text('steps').notNull().default(''),
   source: text('source').notNull(),
@@ -156,9 +155,6 @@ export const canners = pgTable('canners', {
   ...timestamps,
 }, t => [index('canners_household_idx').on(t.householdId)])
 
-export const priceKinds = ['ingredient', 'salt', 'lid', 'jar', 'vinegar'] as const
-export type PriceKind = (typeof priceKinds)[number]
-
 export const priceItems = pgTable('price_items', {
   id: uuid('id').primaryKey().defaultRandom(),
   householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
@@ -166,7 +162,7 @@ export const priceItems = pgTable('price_items', {
   label: text('label').notNull(),
   ingredientId: text('ingredient_id').references(() => ingredients.id),
   jarSizeId: text('jar_size_id').references(() => jarSizes.id),
-  mouth: text('mouth', { enum: ['regular', 'wide'] }),
+  mouth: text('mouth', { enum: jarMouths }),
   /** Package contents: grams (dry goods, salt), millilitres (vinegar) or a count (lids, jars). */
   packageGrams: doublePrecision('package_grams'),
   packageMl: doublePrecision('package_ml'),
@@ -223,8 +219,6 @@ export type PriceItemRow = typeof priceItems.$inferSelect
 // ---------------------------------------------------------------------------
 // Plans
 
-export const planStatuses = ['planned', 'in-progress', 'done'] as const
-
 /** A saved batch plan: the request only; the result is recomputed from current data on read. */
 export const plans = pgTable('plans', {
   id: uuid('id').primaryKey().defaultRandom(),
@@ -256,10 +250,6 @@ export type PlanRow = typeof plans.$inferSelect
 
 // ---------------------------------------------------------------------------
 // After the plan: the Logbook, seal checks, the Shelf, photos and mail
-
-export const loadStatuses = ['done', 'pending'] as const
-export const unsealedActions = ['refrigerate', 'reprocess'] as const
-export type UnsealedAction = (typeof unsealedActions)[number]
 
 /** What a logged load fell short of: the pressure and minutes it needed, and what to do. */
 export interface LoadShortfall {
@@ -351,7 +341,7 @@ export const shelfLots = pgTable('shelf_lots', {
   bestBy: date('best_by').notNull(),
   jarsIn: integer('jars_in').notNull(),
   jarsLeft: integer('jars_left').notNull(),
-  source: text('source', { enum: ['seal-check', 'import'] }).notNull(),
+  source: text('source', { enum: shelfSources }).notNull(),
   /** When the jars reached the Shelf (for the stock-over-time chart). */
   shelvedAt: timestamp('shelved_at', { withTimezone: true }).notNull(),
   ...timestamps,
@@ -395,7 +385,7 @@ export const loadPhotos = pgTable('load_photos', {
   householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
   loadId: uuid('load_id').notNull().references(() => canningLoads.id, { onDelete: 'cascade' }),
   storageKey: text('storage_key').notNull(),
-  contentType: text('content_type', { enum: ['image/jpeg', 'image/png', 'image/webp'] }).notNull(),
+  contentType: text('content_type', { enum: imageTypes }).notNull(),
   bytes: integer('bytes').notNull(),
   originalName: text('original_name').notNull().default(''),
   uploadedBy: uuid('uploaded_by').references(() => users.id, { onDelete: 'set null' }),
@@ -409,7 +399,7 @@ export const loadPhotos = pgTable('load_photos', {
 export const reminders = pgTable('reminders', {
   id: uuid('id').primaryKey().defaultRandom(),
   householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
-  kind: text('kind', { enum: ['seal-check'] }).notNull(),
+  kind: text('kind', { enum: reminderKinds }).notNull(),
   loadId: uuid('load_id').notNull().references(() => canningLoads.id, { onDelete: 'cascade' }),
   dueAt: timestamp('due_at', { withTimezone: true }).notNull(),
   sentAt: timestamp('sent_at', { withTimezone: true }),

@@ -1,5 +1,6 @@
 import { and, desc, eq, inArray, isNull } from 'drizzle-orm'
 import { jarsPerMonthByProduct, stockSeries, usedPerMonth } from '../../utils/after'
+import { openPlanStatuses } from '../../utils/vocabulary'
 import type { Database } from './database'
 import { loadsAwaitingCheck } from './logbook'
 import { sealRates } from './sealCheck'
@@ -12,13 +13,14 @@ import { listShelf } from './shelf'
  */
 export async function pantryBoard(db: Database, householdId: string) {
   const now = serverNow()
-  const [shelf, checks, rates, plans, lots, moves] = await Promise.all([
+  const [zone, shelf, checks, rates, plans, lots, moves] = await Promise.all([
+    householdTimeZone(db, householdId),
     listShelf(db, householdId),
     loadsAwaitingCheck(db, householdId),
     sealRates(db, householdId),
     db.select({ id: tables.plans.id, name: tables.plans.name, status: tables.plans.status, summary: tables.plans.summary, updatedAt: tables.plans.updatedAt })
       .from(tables.plans)
-      .where(and(eq(tables.plans.householdId, householdId), inArray(tables.plans.status, ['planned', 'in-progress'])))
+      .where(and(eq(tables.plans.householdId, householdId), inArray(tables.plans.status, openPlanStatuses)))
       .orderBy(desc(tables.plans.updatedAt)),
     db.select({ shelvedAt: tables.shelfLots.shelvedAt, jarsIn: tables.shelfLots.jarsIn })
       .from(tables.shelfLots).where(eq(tables.shelfLots.householdId, householdId)),
@@ -41,8 +43,8 @@ export async function pantryBoard(db: Database, householdId: string) {
     nearBestBy: shelf.lots.filter(l => l.bestByStatus === 'near'),
     fridge: shelf.fridge,
     sealRates: rates,
-    stockOverTime: stockSeries(lots.map(l => ({ at: l.shelvedAt, jars: l.jarsIn })), taken, now),
-    usedPerMonth: usedPerMonth(taken, now),
-    jarsUsedPerMonth: jarsPerMonthByProduct(taken, now),
+    stockOverTime: stockSeries(lots.map(l => ({ at: l.shelvedAt, jars: l.jarsIn })), taken, now, zone),
+    usedPerMonth: usedPerMonth(taken, now, zone),
+    jarsUsedPerMonth: jarsPerMonthByProduct(taken, now, zone),
   }
 }

@@ -1,5 +1,6 @@
 import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm'
 import type { Canner, Catalogue, HouseholdSettings, PriceItem, Recipe } from '../../utils/planning'
+import { FUTURE_GAUGE_TEST } from '../../utils/schemas/catalogue'
 import type { Database } from './database'
 
 /** Recipes a household may use: the shared library plus its own house recipes. */
@@ -87,7 +88,21 @@ function toPriceItem(row: typeof tables.priceItems.$inferSelect): PriceItem | nu
 }
 
 /** The household's settings, prices and empty jars in the planning computation's shape. */
-export async function loadHouseholdSettings(db: Database, householdId: string): Promise<HouseholdSettings & { name: string }> {
+/** The household's today; a gauge test dated after it is refused, naming the field. */
+export async function cannerToday(db: Database, householdId: string, lastGaugeTestAt?: string | null): Promise<string> {
+  const today = householdToday(await householdTimeZone(db, householdId))
+  if (lastGaugeTestAt && lastGaugeTestAt > today) badInput('lastGaugeTestAt', FUTURE_GAUGE_TEST)
+  return today
+}
+
+/** The household's time zone: its dates ("today", a month, a best-by) are read in it. */
+export async function householdTimeZone(db: Database, householdId: string): Promise<string> {
+  const [household] = await db.select({ timeZone: tables.households.timeZone }).from(tables.households).where(eq(tables.households.id, householdId))
+  if (!household) notFound('No such household.')
+  return household.timeZone
+}
+
+export async function loadHouseholdSettings(db: Database, householdId: string): Promise<HouseholdSettings & { name: string, timeZone: string }> {
   const [household] = await db.select().from(tables.households).where(eq(tables.households.id, householdId))
   if (!household) notFound('No such household.')
   const [prices, stock] = await Promise.all([
@@ -96,6 +111,7 @@ export async function loadHouseholdSettings(db: Database, householdId: string): 
   ])
   return {
     name: household.name,
+    timeZone: household.timeZone,
     altitudeFt: household.altitudeFt,
     unitSystem: household.unitSystem,
     storeCanPriceCents: household.storeCanPriceCents,

@@ -4,6 +4,8 @@
  * only under `nuxt dev` or when SHELFSTEAD_TEST_CLOCK=1 is set explicitly; a production server
  * without that flag always uses the real time.
  */
+import { dateIn } from '../../utils/time'
+
 let offsetMs = 0
 let initialised = false
 
@@ -41,4 +43,9 @@ export function setClockOffset(ms: number): void {
   init()
   if (!clockAdjustable()) throw new Error('The clock may not be moved on this server.')
   offsetMs = ms
+}
+
+/** The household's calendar date now ("2026-12-02"), by the server clock, in its own time zone. */
+export function householdToday(zone: string): string {
+  return dateIn(serverNow(), zone)
 }

@@ -80,3 +80,10 @@ export async function closeDatabase(): Promise<void> {
   ready = false
   await opened?.close()
 }
+
+/** The one row an `insert … returning()` or `update … returning()` wrote; a write that returned none is a defect. */
+export function written<T>(rows: T[]): T {
+  const row = rows[0]
+  if (!row) throw new Error('The write returned no row')
+  return row
+}

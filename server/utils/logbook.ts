@@ -3,6 +3,7 @@ import { PlanningRefusal, type JarSize, type Recipe } from '../../utils/planning
 import { loadCode, loadShortfall, requiredProcess, sealWindow, type RequiredProcess } from '../../utils/after'
 import type { LoadCreateInput, LoadListQuery, LoadUpdateInput } from '../../utils/schemas/logbook'
 import { loadCatalogue } from './catalogue'
+import { nextDay, startOfDayIn } from '../../utils/time'
 import type { Database } from './database'
 import { computePlan, requirePlan } from './plans'
 
@@ -113,12 +114,12 @@ export async function createLoad(db: Database, householdId: string, userId: stri
     for (const line of lines) bySize.set(line.jarSize.id, (bySize.get(line.jarSize.id) ?? 0) + line.jars)
     for (const [jarSizeId, jars] of bySize) {
       await tx.update(tables.jarStock)
-        .set({ count: sql`greatest(${tables.jarStock.count} - ${jars}, 0)`, updatedAt: new Date() })
+        .set({ count: sql`greatest(${tables.jarStock.count} - ${jars}, 0)`, updatedAt: serverNow() })
         .where(and(eq(tables.jarStock.householdId, householdId), eq(tables.jarStock.jarSizeId, jarSizeId)))
     }
     await scheduleSealReminder(tx, householdId, load!.id, endedAt)
     if (body.planId) {
-      await tx.update(tables.plans).set({ status: 'in-progress', updatedAt: new Date() })
+      await tx.update(tables.plans).set({ status: 'in-progress', updatedAt: serverNow() })
         .where(and(eq(tables.plans.id, body.planId), eq(tables.plans.status, 'planned')))
     }
     return load!.id
@@ -138,7 +139,7 @@ export async function updateLoad(db: Database, householdId: string, loadId: stri
   }
   await db.transaction(async (tx) => {
     if (!run) {
-      await tx.update(tables.canningLoads).set({ notes: body.notes ?? load.notes, updatedAt: new Date() }).where(eq(tables.canningLoads.id, load.id))
+      await tx.update(tables.canningLoads).set({ notes: body.notes ?? load.notes, updatedAt: serverNow() }).where(eq(tables.canningLoads.id, load.id))
       return
     }
     const required = load.requiredPsi !== null && load.requiredMinutes !== null ? { psi: load.requiredPsi, minutes: load.requiredMinutes } : null
@@ -156,7 +157,7 @@ export async function updateLoad(db: Database, householdId: string, loadId: stri
       endedAt,
       shortfall,
       notes: body.notes ?? load.notes,
-      updatedAt: new Date(),
+      updatedAt: serverNow(),
     }).where(and(eq(tables.canningLoads.id, load.id), eq(tables.canningLoads.status, 'pending')))
     await scheduleSealReminder(tx, householdId, load.id, endedAt)
   })
@@ -215,15 +216,15 @@ export async function loadDetail(db: Db, householdId: string, loadId: string) {
 const jarsOfLoad = sql<number>`(select coalesce(sum(${tables.loadLines.jars}), 0) from ${tables.loadLines} where ${tables.loadLines.loadId} = ${tables.canningLoads.id})`
 const loadTime = sql`coalesce(${tables.canningLoads.startedAt}, ${tables.canningLoads.createdAt})`
 
-function loadFilters(householdId: string, query: Pick<LoadListQuery, 'recipeId' | 'cannerId' | 'from' | 'to'>): SQL {
+function loadFilters(householdId: string, zone: string, query: Pick<LoadListQuery, 'recipeId' | 'cannerId' | 'from' | 'to'>): SQL {
   const where: SQL[] = [eq(tables.canningLoads.householdId, householdId)]
   if (query.cannerId) where.push(eq(tables.canningLoads.cannerId, query.cannerId))
   if (query.recipeId) {
     where.push(sql`exists (select 1 from ${tables.loadLines} where ${tables.loadLines.loadId} = ${tables.canningLoads.id} and ${tables.loadLines.recipeId} = ${query.recipeId})`)
   }
-  // Date range by the local calendar date the load started (inclusive at both ends).
-  if (query.from) where.push(sql`${loadTime} >= ${new Date(`${query.from}T00:00:00`).toISOString()}::timestamptz`)
-  if (query.to) where.push(sql`${loadTime} < (${new Date(`${query.to}T00:00:00`).toISOString()}::timestamptz + interval '1 day')`)
+  // Date range by the household's calendar date the load started (inclusive at both ends).
+  if (query.from) where.push(sql`${loadTime} >= ${startOfDayIn(query.from, zone).toISOString()}::timestamptz`)
+  if (query.to) where.push(sql`${loadTime} < ${startOfDayIn(nextDay(query.to), zone).toISOString()}::timestamptz`)
   return and(...where)!
 }
 
@@ -239,7 +240,7 @@ const sortColumns = {
 /** One page of the Logbook, filtered and sorted by the database, with each load's lines. */
 export async function listLoads(db: Database, householdId: string, query: LoadListQuery) {
   const now = serverNow()
-  const where = loadFilters(householdId, query)
+  const where = loadFilters(householdId, await householdTimeZone(db, householdId), query)
   const descending = query.sort.startsWith('-')
   const key = query.sort.replace(/^-/, '') as keyof typeof sortColumns
   const order = descending ? sql`${sortColumns[key]} desc nulls last` : sql`${sortColumns[key]} asc nulls last`
@@ -281,7 +282,7 @@ export async function listLoads(db: Database, householdId: string, query: LoadLi
 
 /** Every load matching the filters (no paging), oldest first, for the CSV export. */
 export async function loadsForExport(db: Database, householdId: string, query: Pick<LoadListQuery, 'recipeId' | 'cannerId' | 'from' | 'to'>) {
-  const where = loadFilters(householdId, query)
+  const where = loadFilters(householdId, await householdTimeZone(db, householdId), query)
   const rows = await db.select().from(tables.canningLoads).where(where).orderBy(asc(loadTime), asc(tables.canningLoads.number))
   const ids = rows.map(r => r.id)
   const lines = ids.length ? await db.select().from(tables.loadLines).where(inArray(tables.loadLines.loadId, ids)).orderBy(asc(tables.loadLines.lineIndex)) : []

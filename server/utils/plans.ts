@@ -11,12 +11,6 @@ function amountOf(line: PlanLineBody): PlanLineRequest['amount'] {
   return { mode: 'consumption', jarsPerMonth: line.jarsPerMonth!, months: line.months!, jarsOnShelf: line.jarsOnShelf }
 }
 
-/** Local wall-clock date (YYYY-MM-DD) of the server, for the gauge-test check. */
-function today(): string {
-  const now = new Date()
-  return new Date(now.getTime() - now.getTimezoneOffset() * 60_000).toISOString().slice(0, 10)
-}
-
 /**
  * Compute a plan for a household from current data. A request the planning model refuses
  * becomes a 422 whose message says what to change; unknown recipes, jar sizes, ingredients or
@@ -63,7 +57,7 @@ export async function computePlan(db: Database, householdId: string, body: PlanR
 
   try {
     const result = planBatch(
-      { lines, canners, startAt: body.startAt, altitudeFt: body.altitudeFt ?? household.altitudeFt, today: today() },
+      { lines, canners, startAt: body.startAt, altitudeFt: body.altitudeFt ?? household.altitudeFt, today: householdToday(household.timeZone) },
       { ...catalogue, recipes: planningRecipes },
       household,
     )

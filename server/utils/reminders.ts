@@ -1,8 +1,7 @@
 import { and, eq, inArray, isNull, lte, sql } from 'drizzle-orm'
 import { loadCode, sealWindow } from '../../utils/after'
+import { formatDateTimeLong } from '../../utils/time'
 import type { Database } from './database'
-
-const when = (d: Date) => d.toLocaleString('en-US', { weekday: 'long', month: 'long', day: 'numeric', hour: 'numeric', minute: '2-digit', timeZoneName: 'short' })
 
 /** Who hears about a seal check: the household's canners and owners. */
 async function recipientsOf(db: Database, householdId: string): Promise<string[]> {
@@ -16,6 +15,9 @@ export async function sealReminderMessage(db: Database, loadId: string) {
   const [load] = await db.select().from(tables.canningLoads).where(eq(tables.canningLoads.id, loadId))
   if (!load?.endedAt) return null
   const lines = await db.select().from(tables.loadLines).where(eq(tables.loadLines.loadId, loadId))
+  // Times in the mail are the household's own, with the zone's abbreviation ("7:30 PM MST").
+  const zone = await householdTimeZone(db, load.householdId)
+  const when = (d: Date) => formatDateTimeLong(d, zone)
   const window = sealWindow(load.endedAt, load.endedAt)
   const code = loadCode(load.number)
   const jars = lines.map(l => `${l.jars} × ${l.product} (${l.jarSizeId.replace(/-/g, ' ')})`)

@@ -1,10 +1,9 @@
 import { and, asc, eq, isNotNull, isNull } from 'drizzle-orm'
-import { REPROCESS_WITHIN_HOURS, bestByDate, localDate, loadCode, sealRate, sealRatesBy, sealWindow } from '../../utils/after'
+import { dateIn, formatDateTime } from '../../utils/time'
+import { REPROCESS_WITHIN_HOURS, bestByDate, loadCode, sealRate, sealRatesBy, sealWindow } from '../../utils/after'
 import type { SealCheckInput } from '../../utils/schemas/logbook'
 import type { Database } from './database'
 import { loadDetail, nextLoadNumber, requireLoad } from './logbook'
-
-const when = (d: Date) => d.toLocaleString('en-US', { weekday: 'short', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' })
 
 /**
  * Record a load's seal check: 12 h or more after it came out (USDA CG "Cooling jars": cool
@@ -19,12 +18,13 @@ export async function recordSealCheck(db: Database, householdId: string, userId:
   if (load.status !== 'done' || !load.endedAt) refusal('This load has not been run yet: log its run first, then check its seals 12–24 hours after it comes out.', 'loadId')
   const [existing] = await db.select({ id: tables.sealChecks.id }).from(tables.sealChecks).where(eq(tables.sealChecks.loadId, load.id))
   if (existing) conflict(`The seal check of load ${loadCode(load.number)} is already recorded.`)
+  const [household] = await db.select().from(tables.households).where(eq(tables.households.id, householdId))
+  if (!household) notFound('No such household.')
   const window = sealWindow(load.endedAt, now)
   if (window.status === 'cooling') {
-    refusal(`Let the jars cool undisturbed: test the seals from ${when(window.dueAt)}, 12 hours after the load came out (USDA Complete Guide, "Cooling jars").`, 'loadId')
+    refusal(`Let the jars cool undisturbed: test the seals from ${formatDateTime(window.dueAt, household.timeZone)}, 12 hours after the load came out (USDA Complete Guide, "Cooling jars").`, 'loadId')
   }
 
-  const [household] = await db.select().from(tables.households).where(eq(tables.households.id, householdId))
   const lines = await db.select().from(tables.loadLines).where(eq(tables.loadLines.loadId, load.id))
   const unsafe = load.shortfall !== null
   const plan = lines.map((line) => {
@@ -50,8 +50,8 @@ export async function recordSealCheck(db: Database, householdId: string, userId:
     }
   }
 
-  const cannedOn = localDate(load.startedAt ?? load.endedAt)
-  const bestBy = bestByDate(cannedOn, household!.bestByMonths)
+  const cannedOn = dateIn(load.startedAt ?? load.endedAt, household.timeZone)
+  const bestBy = bestByDate(cannedOn, household.bestByMonths)
   const code = loadCode(load.number)
   await db.transaction(async (tx) => {
     const [check] = await tx.insert(tables.sealChecks).values({ loadId: load.id, householdId, checkedAt: now, checkedBy: userId, notes: body.notes })

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto'
 import { and, desc, eq, gt, inArray, isNull, sql } from 'drizzle-orm'
 import { parse } from 'csv-parse/sync'
 import { stringify } from 'csv-stringify/sync'
-import { bestByDate, bestByStatus, fifo, localDate } from '../../utils/after'
+import { bestByDate, bestByStatus, fifo } from '../../utils/after'
 import { ShelfCsvRowSchema, shelfCsvColumns, type TakeOffInput } from '../../utils/schemas/shelf'
 import type { Database } from './database'
 import { visibleRecipes } from './catalogue'
@@ -12,8 +12,7 @@ type Tx = Parameters<Parameters<Database['transaction']>[0]>[0]
 
 /** The Shelf: lots with jars left, oldest first, each with its best-by status; the refrigerator list; the last undoable take-off. */
 export async function listShelf(db: Database, householdId: string) {
-  const now = serverNow()
-  const today = localDate(now)
+  const today = householdToday(await householdTimeZone(db, householdId))
   const rows = await db.select({ lot: tables.shelfLots, jarSizeName: tables.jarSizes.name })
     .from(tables.shelfLots)
     .innerJoin(tables.jarSizes, eq(tables.jarSizes.id, tables.shelfLots.jarSizeId))
@@ -52,7 +51,7 @@ async function lastBatch(db: Database | Tx, householdId: string) {
 
 async function addJarStock(tx: Tx, householdId: string, jarSizeId: string, jars: number) {
   await tx.insert(tables.jarStock).values({ householdId, jarSizeId, count: jars })
-    .onConflictDoUpdate({ target: [tables.jarStock.householdId, tables.jarStock.jarSizeId], set: { count: sql`${tables.jarStock.count} + ${jars}`, updatedAt: new Date() } })
+    .onConflictDoUpdate({ target: [tables.jarStock.householdId, tables.jarStock.jarSizeId], set: { count: sql`${tables.jarStock.count} + ${jars}`, updatedAt: serverNow() } })
 }
 
 /**
@@ -154,7 +153,7 @@ export interface CsvIssue { line: number, field: string, message: string }
  */
 export async function importShelfCsv(db: Database, householdId: string, text: string) {
   const now = serverNow()
-  const today = localDate(now)
+  const today = householdToday(await householdTimeZone(db, householdId))
   let records: string[][]
   try {
     records = parse(text, { bom: true, skip_empty_lines: true, relax_column_count: true, trim: true })

@@ -37,9 +37,9 @@ export function usePhotoStorage(): Storage {
   return storage
 }
 
-export const MAX_PHOTO_BYTES = 8 * 1024 * 1024
+export { MAX_PHOTO_BYTES } from '../../utils/defaults'
 
-export type ImageType = 'image/jpeg' | 'image/png' | 'image/webp'
+export type { ImageType } from '../../utils/vocabulary'
 
 /** The image type from the file's first bytes (its "magic number"), never from its name or the browser's claim. */
 export function detectImageType(bytes: Uint8Array): ImageType | null {

@@ -8,6 +8,8 @@
  * days (CG "Reprocessing unsealed jars", MSU-PFS 01600593); use within about a year (OSU EM 9435).
  */
 import { bandAltitude, pressureFor, processMinutesFor } from '../planning/process'
+import { dateIn } from '../time'
+import type { BestByStatus, SealCheckStatus } from '../vocabulary'
 import type { GaugeType, JarSize, Recipe } from '../planning/types'
 
 export const SEAL_CHECK_AFTER_HOURS = 12
@@ -94,7 +96,7 @@ const fmt = (n: number) => (Number.isInteger(n) ? String(n) : n.toFixed(1))
 // ---------------------------------------------------------------------------
 // The seal-check window
 
-export type SealCheckStatus = 'cooling' | 'due' | 'overdue'
+export type { SealCheckStatus } from '../vocabulary'
 
 export interface SealWindow {
   dueAt: Date
@@ -114,11 +116,6 @@ export function sealWindow(endedAt: Date, now: Date): SealWindow {
 
 // ---------------------------------------------------------------------------
 // Dates
-
-/** The local calendar date (YYYY-MM-DD) of an instant. */
-export function localDate(at: Date): string {
-  return new Date(at.getTime() - at.getTimezoneOffset() * 60_000).toISOString().slice(0, 10)
-}
 
 function parseDate(iso: string): { y: number, m: number, d: number } {
   const [y, m, d] = iso.slice(0, 10).split('-').map(Number) as [number, number, number]
@@ -146,7 +143,7 @@ export function daysBetween(from: string, to: string): number {
   return Math.round((Date.UTC(b.y, b.m - 1, b.d) - Date.UTC(a.y, a.m - 1, a.d)) / DAY_MS)
 }
 
-export type BestByStatus = 'past' | 'near' | 'ok'
+export type { BestByStatus } from '../vocabulary'
 
 /** 'past' after the best-by date, 'near' within 30 days of it (inclusive), else 'ok'. */
 export function bestByStatus(bestBy: string, today: string): BestByStatus {
@@ -198,14 +195,14 @@ export function sealRatesBy<T extends { sealed: number | null, unsealed: number 
 // ---------------------------------------------------------------------------
 // Stock over time and jars used per month
 
-/** "2026-03" for an instant, in local time. */
-export function monthKey(at: Date): string {
-  return localDate(at).slice(0, 7)
+/** "2026-03" for an instant, in the household's time zone. */
+export function monthKey(at: Date, zone: string): string {
+  return dateIn(at, zone).slice(0, 7)
 }
 
 /** The last `count` month keys up to and including the month of `now`, oldest first. */
-export function lastMonths(now: Date, count: number): string[] {
-  const current = `${monthKey(now)}-01`
+export function lastMonths(now: Date, zone: string, count: number): string[] {
+  const current = `${monthKey(now, zone)}-01`
   return Array.from({ length: count }, (_, i) => addMonths(current, i - count + 1).slice(0, 7))
 }
 
@@ -215,19 +212,19 @@ export interface StockEvent { at: Date, jars: number }
  * Jars on the Shelf at the end of each of the last `count` months: every lot shelved adds its
  * jars, every take-off still standing (not undone) removes its jars.
  */
-export function stockSeries(added: readonly StockEvent[], taken: readonly StockEvent[], now: Date, count = 12): Array<{ month: string, jars: number }> {
-  return lastMonths(now, count).map((month) => {
-    const upTo = (e: StockEvent) => monthKey(e.at) <= month
+export function stockSeries(added: readonly StockEvent[], taken: readonly StockEvent[], now: Date, zone: string, count = 12): Array<{ month: string, jars: number }> {
+  return lastMonths(now, zone, count).map((month) => {
+    const upTo = (e: StockEvent) => monthKey(e.at, zone) <= month
     const jars = added.filter(upTo).reduce((s, e) => s + e.jars, 0) - taken.filter(upTo).reduce((s, e) => s + e.jars, 0)
     return { month, jars }
   })
 }
 
 /** Jars taken off the Shelf in each of the last `count` months. */
-export function usedPerMonth(taken: readonly StockEvent[], now: Date, count = 12): Array<{ month: string, jars: number }> {
-  return lastMonths(now, count).map(month => ({
+export function usedPerMonth(taken: readonly StockEvent[], now: Date, zone: string, count = 12): Array<{ month: string, jars: number }> {
+  return lastMonths(now, zone, count).map(month => ({
     month,
-    jars: taken.filter(e => monthKey(e.at) === month).reduce((s, e) => s + e.jars, 0),
+    jars: taken.filter(e => monthKey(e.at, zone) === month).reduce((s, e) => s + e.jars, 0),
   }))
 }
 
@@ -239,12 +236,13 @@ export function usedPerMonth(taken: readonly StockEvent[], now: Date, count = 12
 export function jarsPerMonthByProduct(
   taken: ReadonlyArray<StockEvent & { key: string, product: string, recipeId: string | null, jarSizeId: string }>,
   now: Date,
+  zone: string,
   window = 12,
 ): Array<{ key: string, product: string, recipeId: string | null, jarSizeId: string, jars: number, months: number, jarsPerMonth: number }> {
-  const months = lastMonths(now, window)
-  const inWindow = taken.filter(e => monthKey(e.at) >= months[0]!)
+  const months = lastMonths(now, zone, window)
+  const inWindow = taken.filter(e => monthKey(e.at, zone) >= months[0]!)
   if (!inWindow.length) return []
-  const first = inWindow.reduce((min, e) => (monthKey(e.at) < min ? monthKey(e.at) : min), months[months.length - 1]!)
+  const first = inWindow.reduce((min, e) => (monthKey(e.at, zone) < min ? monthKey(e.at, zone) : min), months[months.length - 1]!)
   const span = Math.max(1, months.length - months.indexOf(first))
   const byKey = new Map<string, { product: string, recipeId: string | null, jarSizeId: string, jars: number }>()
   for (const e of inWindow) {

@@ -51,8 +51,8 @@ export function planBatch(
   const system: UnitSystem = household.unitSystem === 'metric' ? 'metric' : 'us'
   const clearanceMm = options.clearanceMm ?? DEFAULT_CLEARANCE_MM
   const steps = { ...DEFAULT_STEP_MINUTES, ...options.stepMinutes }
-  const today = request.today ?? new Date().toISOString().slice(0, 10)
-  const start = parseStart(request.startAt, request.today)
+  const today = request.today
+  const start = parseStart(request.startAt, today)
   const altitude = bandAltitude(request.altitudeFt, 'altitudeFt')
   const canners = request.canners
 

@@ -10,7 +10,7 @@
  *
  * Times: `startAt` keeps its own offset — "Z", "±hh:mm", or none for local wall-clock time —
  * and every step is written back with that same offset. Without `startAt` the day starts at
- * 08:00 local wall-clock time on `today` (or on today's UTC date). A pure function has no
+ * 08:00 wall-clock time on `today` (the household's date, given by the caller). A pure function has no
  * household time zone, so wall-clock times ignore daylight-saving changes within the day.
  */
 import { PlanningRefusal } from './errors'
@@ -74,8 +74,8 @@ export interface DayStart {
 const ISO = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.\d+)?)?)?(Z|[+-]\d{2}:\d{2})?$/
 
 /** Read an ISO date or date-time; a bare date means 08:00 that day. Refuses anything else. */
-export function parseStart(startAt: string | undefined, today: string | undefined, field = 'startAt'): DayStart {
-  const text = startAt ?? `${today ?? new Date().toISOString().slice(0, 10)}T08:00`
+export function parseStart(startAt: string | undefined, today: string, field = 'startAt'): DayStart {
+  const text = startAt ?? `${today}T08:00`
   const m = ISO.exec(text.trim())
   const parts = m ? [m[1], m[2], m[3], m[4] ?? '08', m[5] ?? '00', m[6] ?? '00'].map(Number) : []
   const [y = NaN, mo = NaN, d = NaN, h = NaN, mi = NaN, s = NaN] = parts

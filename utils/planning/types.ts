@@ -4,9 +4,9 @@
  * give them. Money is always integer cents.
  */
 
-export type JarMouth = 'regular' | 'wide'
-export type GaugeType = 'dial' | 'weighted'
-export type UnitSystem = 'us' | 'metric'
+import type { FillBasis, GaugeType, JarMouth, PackStyle, RecipeStatus, UnitSystem } from '../vocabulary'
+
+export type { GaugeType, JarMouth, UnitSystem }
 
 export interface JarSize {
   id: string
@@ -51,14 +51,14 @@ export interface PressureBand {
 export interface Recipe {
   id: string
   name: string
-  status: 'tested' | 'house'
-  packStyle: 'hot' | 'raw' | 'dry'
+  status: RecipeStatus
+  packStyle: PackStyle
   ingredientId: string
   headspaceMm: number
   /** f: the largest fraction of the jar's capacity the hydrated solids may take. */
   solidsFillFraction: number
   /** 'cap': dry volume per jar is the cap f·V/E (or less); 'published': grams from `perJar`. */
-  fillBasis: 'cap' | 'published'
+  fillBasis: FillBasis
   perJar: PerJarAmount[]
   processMinutes: ProcessTime[]
   pressureBands: PressureBand[]
@@ -152,8 +152,8 @@ export interface PlanRequest {
   /** ISO date-time; its offset (Z, ±hh:mm or none for local wall-clock time) is kept. */
   startAt?: string
   altitudeFt: number
-  /** ISO date used for the gauge-test check and the default start. */
-  today?: string
+  /** The household's date today (server clock, household time zone): the gauge-test check and the default start. */
+  today: string
 }
 
 export interface Catalogue {

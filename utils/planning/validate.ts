@@ -5,6 +5,7 @@
  * (a 3,000 mm canner) and to keep every search small.
  */
 import { PlanningRefusal, requireNumber as num } from './errors'
+import { fillBases, gaugeTypes, packStyles } from '../vocabulary'
 import type { Canner, HouseholdSettings, Ingredient, JarSize, PlanOptions, PlanRequest, Recipe } from './types'
 
 const oneOf = <T extends string>(value: T, allowed: readonly T[], field: string, what: string): void => {
@@ -18,7 +19,7 @@ export function validateCanner(c: Canner, field: string): void {
   num(c.rackThicknessMm, `${field}.rackThicknessMm`, `The rack thickness of ${c.name}`, { max: 100 })
   num(c.maxLayers, `${field}.maxLayers`, `The most layers of ${c.name}`, { min: 1, max: 10, integer: true })
   num(c.waterDepthMm, `${field}.waterDepthMm`, `The water depth of ${c.name}`, { max: 500 })
-  oneOf(c.gaugeType, ['dial', 'weighted'], `${field}.gaugeType`, 'The gauge type')
+  oneOf(c.gaugeType, gaugeTypes, `${field}.gaugeType`, 'The gauge type')
 }
 
 /** Jar capacity up to 5 L, diameter up to 500 mm, height up to 600 mm. */
@@ -36,8 +37,8 @@ export function validateIngredient(i: Ingredient, field: string): void {
 
 /** Recipe data as used for this jar: fractions, headspace below the jar top, times, pressures, amounts. */
 export function validateRecipe(r: Recipe, jar: JarSize, field: string): void {
-  oneOf(r.fillBasis, ['cap', 'published'], `${field}.fillBasis`, 'The fill basis')
-  oneOf(r.packStyle, ['hot', 'raw', 'dry'], `${field}.packStyle`, 'The pack style')
+  oneOf(r.fillBasis, fillBases, `${field}.fillBasis`, 'The fill basis')
+  oneOf(r.packStyle, packStyles, `${field}.packStyle`, 'The pack style')
   num(r.solidsFillFraction, `${field}.solidsFillFraction`, `The solids fraction of ${r.name}`, { min: 0, above: true, max: 1 })
   num(r.headspaceMm, `${field}.headspaceMm`, `The headspace of ${r.name}`, { max: 100 })
   if (r.headspaceMm >= jar.heightMm) {

@@ -2,7 +2,8 @@
  * Schemas and pure rules for the catalogue and household equipment: house recipes, canners,
  * the price list and empty jars owned. Shared by the API routes and the forms.
  */
-import { z } from 'zod'
+import { gaugeTypes, jarMouths, packStyles } from '../vocabulary'
+import { z } from './z'
 import { formatLength } from '../planning/units'
 import { gaugeTestWarning } from '../planning/process'
 import type { Canner, GaugeType } from '../planning/types'
@@ -47,7 +48,7 @@ export const HouseRecipeSchema = z.object({
   basedOnRecipeId: z.string({ required_error: 'Choose the tested recipe whose process table this recipe borrows.', invalid_type_error: 'Choose the tested recipe whose process table this recipe borrows.' })
     .min(1, 'Choose the tested recipe whose process table this recipe borrows.'),
   ingredientId: z.string({ required_error: 'Choose the bean.', invalid_type_error: 'Choose the bean.' }).min(1, 'Choose the bean.'),
-  packStyle: z.enum(['hot', 'raw', 'dry'], { errorMap: () => ({ message: 'Choose hot pack, raw pack or dry pack.' }) }),
+  packStyle: z.enum(packStyles, { errorMap: () => ({ message: 'Choose hot pack, raw pack or dry pack.' }) }),
   headspaceMm: num('Choose the headspace.')
     .min(MIN_HEADSPACE_MM, 'Beans are low-acid: leave at least 1 inch (25.4 mm) of headspace in a pressure canner.')
     .max(50.8, 'More than 2 inches (51 mm) of headspace can leave too much air in the jar to seal well.'),
@@ -160,25 +161,18 @@ export function houseRecipeRow(body: HouseRecipeInput, base: { name: string, sou
 // Canners
 
 const isoDate = /^\d{4}-\d{2}-\d{2}$/
-/** Today's local wall-clock date, YYYY-MM-DD. */
-export function localToday(): string {
-  const now = new Date()
-  return new Date(now.getTime() - now.getTimezoneOffset() * 60_000).toISOString().slice(0, 10)
-}
-
 export const CannerSchema = z.object({
   name: z.string().trim().min(1, 'Name the canner, for example "Tall canner (23 qt)".').max(80, 'Keep the name under 80 characters.'),
   innerDiameterMm: mmBetween('The inside diameter', 150, 600, 'Measure straight across the inside of the pot.'),
   usableHeightMm: mmBetween('The usable height', 100, 600, 'Measure from the rack to the underside of the closed lid.'),
   rackThicknessMm: mmBetween('The rack thickness', 0, 40),
-  gaugeType: z.enum(['dial', 'weighted'], { errorMap: () => ({ message: 'Choose a dial gauge or a weighted gauge.' }) }),
+  gaugeType: z.enum(gaugeTypes, { errorMap: () => ({ message: 'Choose a dial gauge or a weighted gauge.' }) }),
   maxLayers: num('Enter how many layers of jars the canner takes.').int('Enter whole layers.').min(1, 'A canner takes at least one layer.').max(3, 'No home canner stacks more than 3 layers.'),
   waterDepthMm: mmBetween('The water depth', 25, 200, 'Use the depth your canner\'s manual gives, usually 2–3 inches.'),
   lastGaugeTestAt: z.preprocess(
     v => (v === '' ? null : v),
     z.string().regex(isoDate, 'Enter the date of the last gauge test, or leave it empty.')
       .refine(d => !Number.isNaN(Date.parse(d)), 'That date does not exist.')
-      .refine(d => d <= localToday(), 'A gauge test date cannot be in the future.')
       .nullable(),
   ).optional(),
 })
@@ -193,8 +187,11 @@ export function gaugeTestDue(canner: Canner, today: string): boolean {
   return gaugeTestWarning(canner, today, 'canner') !== null
 }
 
+/** Message for a gauge test dated after the household's today (checked by the server, which knows the date). */
+export const FUTURE_GAUGE_TEST = 'A gauge test date cannot be in the future.'
+
 /** A canner row as the API answers it: with `gaugeTestDue` as of today. */
-export function withGaugeStatus<T extends Canner>(canner: T, today = localToday()): T & { gaugeTestDue: boolean } {
+export function withGaugeStatus<T extends Canner>(canner: T, today: string): T & { gaugeTestDue: boolean } {
   return { ...canner, gaugeTestDue: gaugeTestDue(canner, today) }
 }
 
@@ -211,7 +208,7 @@ export const priceKindLabels = { ingredient: 'Beans', salt: 'Salt', lid: 'Lids',
 export const PriceItemSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('ingredient'), label, priceCents, ingredientId: z.string({ invalid_type_error: 'Choose the bean.' }).min(1, 'Choose the bean.'), packageGrams }),
   z.object({ kind: z.literal('salt'), label, priceCents, packageGrams }),
-  z.object({ kind: z.literal('lid'), label, priceCents, mouth: z.enum(['regular', 'wide'], { errorMap: () => ({ message: 'Choose regular or wide mouth.' }) }), packCount }),
+  z.object({ kind: z.literal('lid'), label, priceCents, mouth: z.enum(jarMouths, { errorMap: () => ({ message: 'Choose regular or wide mouth.' }) }), packCount }),
   z.object({ kind: z.literal('jar'), label, priceCents, jarSizeId: z.string({ invalid_type_error: 'Choose the jar size.' }).min(1, 'Choose the jar size.'), packCount }),
   z.object({ kind: z.literal('vinegar'), label, priceCents, packageMl: num('Enter the bottle size.').positive('A bottle holds more than nothing.').max(20_000, 'A bottle over 20 L looks like a typing slip.') }),
 ], { errorMap: (issue, ctx) => (issue.code === 'invalid_union_discriminator' ? { message: 'Choose what the item is: beans, salt, lids, jars or vinegar.' } : { message: ctx.defaultError }) })
@@ -250,3 +247,4 @@ export const JarStockSchema = z.object({
   jarSizeId: z.string({ required_error: 'Choose the jar size.' }).min(1, 'Choose the jar size.'),
   count: num('Enter how many empty jars you have.').int('Enter whole jars.').min(0, 'You cannot own fewer than 0 jars.').max(10_000, 'More than 10,000 jars looks like a typing slip.'),
 })
+export type JarStockInput = z.infer<typeof JarStockSchema>

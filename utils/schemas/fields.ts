@@ -4,7 +4,7 @@
  * never read as 0 or as some other number, because the planner's pressure and times come from
  * these values.
  */
-import { z } from 'zod'
+import { z } from './z'
 
 interface NumberLimits {
   min?: number

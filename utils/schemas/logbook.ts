@@ -1,5 +1,7 @@
 /** Schemas of the Logbook and the seal check, shared by the API routes and the forms. */
-import { z } from 'zod'
+import { unsealedActions } from '../vocabulary'
+import { z } from './z'
+import { fromLocalInput, isLocalInput } from '../time'
 import { queryWholeNumber } from './fields'
 
 const uuid = (what: string) => z.string({ required_error: `Choose the ${what}.`, invalid_type_error: `Choose the ${what}.` }).uuid(`That ${what} id is not valid.`)
@@ -54,6 +56,26 @@ export const LoadCreateSchema = z.object({
 })
 export type LoadCreateInput = z.infer<typeof LoadCreateSchema>
 
+/**
+ * A route schema for a form: the form holds its times as `<input type="datetime-local">`
+ * values, read in the household's time zone, and an emptied product name as "use the
+ * recipe's"; both are turned into what the route takes, then the route's own schema decides.
+ */
+export function asLoadForm<T extends z.ZodTypeAny>(schema: T, zone: () => string) {
+  return z.preprocess((value) => {
+    if (!value || typeof value !== 'object') return value
+    const form = { ...(value as Record<string, unknown>) }
+    for (const key of ['startedAt', 'endedAt']) {
+      if (isLocalInput(form[key])) form[key] = fromLocalInput(form[key], zone())
+      else if (form[key] === '') form[key] = undefined
+    }
+    if (Array.isArray(form.lines)) {
+      form.lines = form.lines.map((line: Record<string, unknown>) => (typeof line?.product === 'string' && !line.product.trim() ? { ...line, product: undefined } : line))
+    }
+    return form
+  }, schema)
+}
+
 /** Record how a pending (reprocessing) load was run, or change a load's notes. */
 export const LoadUpdateSchema = z.object({
   ...processFields,
@@ -86,7 +108,7 @@ export const SealCheckLineSchema = z.object({
   loadLineId: uuid('load line'),
   sealed: wholeNumber('Enter how many jars sealed.').min(0, 'Sealed jars cannot be fewer than 0.').max(60),
   unsealed: wholeNumber('Enter how many jars did not seal.').min(0, 'Unsealed jars cannot be fewer than 0.').max(60),
-  action: z.enum(['refrigerate', 'reprocess'], { errorMap: () => ({ message: 'Choose what to do with the jars that cannot go on the shelf: refrigerate or reprocess.' }) }).optional(),
+  action: z.enum(unsealedActions, { errorMap: () => ({ message: 'Choose what to do with the jars that cannot go on the shelf: refrigerate or reprocess.' }) }).optional(),
 })
 
 export const SealCheckSchema = z.object({

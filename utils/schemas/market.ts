@@ -1,4 +1,4 @@
-import { z } from 'zod'
+import { z } from './z'
 
 export const MarketCheckSchema = z.object({
   itemKey: z.string().min(1, 'Say which item.').max(200),

@@ -1,4 +1,4 @@
-import { z } from 'zod'
+import { z } from './z'
 
 export const HouseholdPlanParamsSchema = z.object({
   id: z.string().uuid('That household id is not valid.'),

@@ -1,4 +1,5 @@
-import { z } from 'zod'
+import { planStatuses } from '../vocabulary'
+import { z } from './z'
 
 const positiveWhole = (what: string, max: number) =>
   z.number({ invalid_type_error: `Enter ${what} as a number.` }).int(`Enter ${what} as a whole number.`).positive(`${what[0]!.toUpperCase()}${what.slice(1)} must be more than 0.`).max(max, `That is more ${what} than one plan can hold (${max}).`)
@@ -62,7 +63,7 @@ export const PlanNameSchema = z.string().trim().min(1, 'Name the plan.').max(80,
 export const PlanSaveSchema = z.object({ name: PlanNameSchema, request: PlanRequestSchema })
 export const PlanUpdateSchema = z.object({
   name: PlanNameSchema.optional(),
-  status: z.enum(['planned', 'in-progress', 'done']).optional(),
+  status: z.enum(planStatuses).optional(),
   request: PlanRequestSchema.optional(),
 })
 

@@ -1,5 +1,5 @@
 /** Schemas of the Shelf: taking jars off, labels and the inventory CSV. */
-import { z } from 'zod'
+import { z } from './z'
 
 const uuid = (what: string) => z.string({ required_error: `Choose the ${what}.`, invalid_type_error: `Choose the ${what}.` }).uuid(`That ${what} id is not valid.`)
 

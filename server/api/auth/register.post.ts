@@ -16,7 +16,7 @@ export default defineEventHandler(async (event) => {
     const [created] = await tx.insert(tables.users)
       .values({ email: body.email, name: body.name, passwordHash })
       .returning()
-    const [household] = await tx.insert(tables.households).values({ name: body.householdName }).returning()
+    const [household] = await tx.insert(tables.households).values({ name: body.householdName, timeZone: body.timeZone ?? 'UTC' }).returning()
     await tx.insert(tables.memberships).values({ userId: created!.id, householdId: household!.id, role: 'owner' })
     return created!
   }).catch((error: unknown) => {

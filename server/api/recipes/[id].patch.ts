@@ -11,7 +11,7 @@ export default defineEventHandler(async (event) => {
   const body = await validBody(event, SharedRecipePatchSchema)
   const db = await useDB()
   const [recipe] = await db.update(tables.recipes)
-    .set({ ...body, updatedAt: new Date() })
+    .set({ ...body, updatedAt: serverNow() })
     .where(and(eq(tables.recipes.id, id), isNull(tables.recipes.householdId)))
     .returning()
   if (!recipe) notFound('No such shared recipe.')

@@ -5,10 +5,12 @@
  * Dates are relative to the moment of seeding. Only on an empty database, in demo mode.
  */
 import { and, eq, inArray } from 'drizzle-orm'
-import { bestByDate, loadCode, localDate, requiredProcess, sealWindow } from '../../../utils/after'
+import { bestByDate, loadCode, requiredProcess, sealWindow } from '../../../utils/after'
+import { dateIn } from '../../../utils/time'
 import type { JarSize, Recipe } from '../../../utils/planning/types'
 import type { Database } from '../../utils/database'
 import * as t from '../schema'
+import { DEMO_TIME_ZONE } from './demo'
 
 type Tx = Parameters<Parameters<Database['transaction']>[0]>[0]
 
@@ -99,7 +101,7 @@ export async function seedDemoSeason(db: Database, householdId: string, now = ne
       }
       const checkedAt = new Date(endedAt.getTime() + demo.checkedAfterHours * HOUR)
       await tx.insert(t.sealChecks).values({ loadId: load!.id, householdId, checkedAt, checkedBy: owner?.id ?? null, notes: '' })
-      const cannedOn = localDate(startedAt)
+      const cannedOn = dateIn(startedAt, DEMO_TIME_ZONE)
       for (const [i, l] of demo.lines.entries()) {
         const line = lineRows[i]!
         const sealed = l.jars - (l.unsealed ?? 0)
@@ -137,7 +139,7 @@ export async function seedDemoSeason(db: Database, householdId: string, now = ne
     }
 
     // Last year's kidney beans, imported from a paper inventory: past their best-by.
-    const oldCanned = localDate(new Date(now.getTime() - 400 * DAY))
+    const oldCanned = dateIn(new Date(now.getTime() - 400 * DAY), DEMO_TIME_ZONE)
     const [old] = await tx.insert(t.shelfLots).values({
       householdId, recipeId: 'usda-dried-beans-hot-pack', product: 'Kidney beans, hot pack', jarSizeId: 'pint-regular', loadCode: '2025-B',
       cannedOn: oldCanned, bestBy: bestByDate(oldCanned, household!.bestByMonths), jarsIn: 3, jarsLeft: 3, source: 'import', shelvedAt: new Date(now.getTime() - 330 * DAY),

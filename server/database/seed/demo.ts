@@ -6,6 +6,8 @@ import type { Database } from '../../utils/database'
 import * as t from '../schema'
 
 export const DEMO_PASSWORD = 'put-up-2026'
+/** The demo homestead keeps Mountain time. */
+export const DEMO_TIME_ZONE = 'America/Denver'
 export const demoSignIns = [
   { email: 'owner@demo.shelfstead.test', name: 'Marisol Achterberg', role: 'owner' },
   { email: 'canner@demo.shelfstead.test', name: 'Dev Achterberg', role: 'canner' },
@@ -24,6 +26,7 @@ export async function seedDemoHousehold(
       unitSystem: 'us',
       storeCanPriceCents: 119,
       jarUses: 10,
+      timeZone: DEMO_TIME_ZONE,
       isDemo: true,
     }).returning()
     const people = await tx.insert(t.users)

@@ -2,7 +2,8 @@ import { mountSuspended } from '@nuxt/test-utils/runtime'
 import { describe, expect, it } from 'vitest'
 import RecipeProcessTable from '~/components/recipe/RecipeProcessTable.vue'
 import RecipePressureTable from '~/components/recipe/RecipePressureTable.vue'
-import type { JarSizeView, PressureBandView } from '~/composables/useCatalogue'
+import type { JarSizeView } from '~/composables/useJarSizes'
+import type { PressureBandView } from '~/composables/useRecipes'
 
 const jar = (id: string, sizeKey: string, name: string, capacityMl: number): JarSizeView =>
   ({ id, sizeKey, name, capacityMl, outsideDiameterMm: 80, heightMm: 130, mouth: 'regular', dimensionsNote: '', capacitySource: 'NIST' })

@@ -1,11 +1,17 @@
 import { describe, expect, it } from 'vitest'
 import {
   addMonths, bestByDate, bestByStatus, fifo, jarsPerMonthByProduct, lastMonths, loadCode, loadShortfall,
-  requiredProcess, sealRate, sealWindow, stockSeries,
+  monthKey, requiredProcess, sealRate, sealWindow, stockSeries, usedPerMonth,
 } from '../../../utils/after'
 import type { JarSize, Recipe } from '../../../utils/planning/types'
+import { fromLocalInput } from '../../../utils/time'
 
 const H = 3_600_000
+/** Months are the household's: counted in its own time zone, never the test machine's. */
+const ZONE = 'America/Denver'
+/** Noon (or `hour`) on a calendar day in ZONE; `month` counts from 0 like Date's. */
+const inZone = (year: number, month: number, day: number, hour = 12) =>
+  new Date(fromLocalInput(`${year}-${String(month + 1).padStart(2, '0')}-${String(day).padStart(2, '0')}T${String(hour).padStart(2, '0')}:00`, ZONE))
 
 describe('the seal-check window', () => {
   // USDA Complete Guide, "Cooling jars" / "Testing jar seals" (MSU-PFS 01600951): cool 12–24 h, then test
@@ -84,21 +90,29 @@ describe('seal rates and stock over time', () => {
     expect(sealRate([{ sealed: 17, unsealed: 1 }, { sealed: 7, unsealed: 0 }, { sealed: null, unsealed: null }])).toEqual({ sealed: 24, unsealed: 1, rate: 24 / 25 })
     expect(sealRate([]).rate).toBeNull()
   })
-  const now = new Date(2026, 11, 15, 12)
+  const now = inZone(2026, 11, 15, 12)
+  it('puts an instant in the month it was in the household\'s time zone', () => {
+    // IANA tz database: Denver keeps Mountain Standard Time (UTC−7) in winter, so 03:00 UTC on
+    // 1 December is 20:00 on 30 November there; in UTC it is already December.
+    const lateEvening = new Date('2026-12-01T03:00:00Z')
+    expect(monthKey(lateEvening, ZONE)).toBe('2026-11')
+    expect(monthKey(lateEvening, 'UTC')).toBe('2026-12')
+    expect(usedPerMonth([{ at: lateEvening, jars: 2 }], lateEvening, ZONE, 2)).toEqual([{ month: '2026-10', jars: 0 }, { month: '2026-11', jars: 2 }])
+  })
   it('lists the last twelve months, oldest first', () => {
-    const months = lastMonths(now, 12)
+    const months = lastMonths(now, ZONE, 12)
     expect(months[0]).toBe('2026-01')
     expect(months.at(-1)).toBe('2026-12')
   })
   it('adds shelved jars and takes away jars used, month by month', () => {
-    const added = [{ at: new Date(2026, 8, 10), jars: 18 }, { at: new Date(2026, 10, 2), jars: 7 }]
-    const taken = [{ at: new Date(2026, 9, 5), jars: 4 }, { at: new Date(2026, 11, 1), jars: 2 }]
-    const series = stockSeries(added, taken, now, 4)
+    const added = [{ at: inZone(2026, 8, 10), jars: 18 }, { at: inZone(2026, 10, 2), jars: 7 }]
+    const taken = [{ at: inZone(2026, 9, 5), jars: 4 }, { at: inZone(2026, 11, 1), jars: 2 }]
+    const series = stockSeries(added, taken, now, ZONE, 4)
     expect(series).toEqual([{ month: '2026-09', jars: 18 }, { month: '2026-10', jars: 14 }, { month: '2026-11', jars: 21 }, { month: '2026-12', jars: 19 }])
   })
   it('gives jars per month by product since the first take-off', () => {
-    const e = (month: number, jars: number, product: string) => ({ at: new Date(2026, month, 10), jars, key: product, product, recipeId: null, jarSizeId: 'pint-regular' })
-    const rows = jarsPerMonthByProduct([e(9, 4, 'Pinto'), e(10, 6, 'Pinto'), e(11, 2, 'Pinto'), e(11, 3, 'Black')], now)
+    const e = (month: number, jars: number, product: string) => ({ at: inZone(2026, month, 10), jars, key: product, product, recipeId: null, jarSizeId: 'pint-regular' })
+    const rows = jarsPerMonthByProduct([e(9, 4, 'Pinto'), e(10, 6, 'Pinto'), e(11, 2, 'Pinto'), e(11, 3, 'Black')], now, ZONE)
     // October to December: three months
     expect(rows).toEqual([
       expect.objectContaining({ product: 'Pinto', jars: 12, months: 3, jarsPerMonth: 4 }),

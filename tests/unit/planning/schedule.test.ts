@@ -5,7 +5,7 @@ import { DEFAULT_STEP_MINUTES, PlanningRefusal, buildSchedule, coolDownMinutes, 
 // heat to vent 12–15 min (we use 15), vent 10, pressurise 3–5 (5), natural cool-down about 30 min
 // for pints and 45 for quarts, wait 10 min after zero, unload (our 5).
 const load = (index: number, cannerId: string, processMinutes: number, coolMinutes: number) => ({ index, cannerId, processMinutes, coolMinutes })
-const start = parseStart('2025-09-14T08:00', undefined)
+const start = parseStart('2025-09-14T08:00', '2025-09-14')
 
 describe('one load', () => {
   it('pints at 75 min: 15 + 10 + 5 + 75 + 30 + 10 + 5 = 150 min, 08:00 to 10:30', () => {
@@ -52,12 +52,12 @@ describe('start times keep their offset', () => {
     ['2025-09-14T23:00', '2025-09-15T01:30:00'],
     ['2025-09-14', '2025-09-14T10:30:00'],
   ])('%s + 150 min → %s', (text, end) => {
-    expect(buildSchedule([load(1, 'a', 75, 30)], parseStart(text, undefined), DEFAULT_STEP_MINUTES).endAt).toBe(end)
+    expect(buildSchedule([load(1, 'a', 75, 30)], parseStart(text, '2025-09-14'), DEFAULT_STEP_MINUTES).endAt).toBe(end)
   })
   it('without a start, 08:00 local wall-clock time on `today`', () => {
     expect(buildSchedule([], parseStart(undefined, '2025-09-14'), DEFAULT_STEP_MINUTES).startAt).toBe('2025-09-14T08:00:00')
   })
   it.each(['tomorrow', '2025-02-30T08:00', '2025-09-14T25:00', '2025-09-14T08:61'])('refuses "%s"', (text) => {
-    expect(() => parseStart(text, undefined)).toThrow(PlanningRefusal)
+    expect(() => parseStart(text, '2025-09-14')).toThrow(PlanningRefusal)
   })
 })

@@ -5,10 +5,11 @@ import { CannerParamsSchema, CannerSchema, withGaugeStatus } from '../../../../.
 export default defineEventHandler(async (event) => {
   const { params: { id, cannerId }, db } = await requireHouseholdRole(event, CannerParamsSchema, 'owner')
   const body = await validBody(event, CannerSchema.partial())
+  const today = await cannerToday(db, id, body.lastGaugeTestAt)
   const [canner] = await db.update(tables.canners)
-    .set({ ...body, updatedAt: new Date() })
+    .set({ ...body, updatedAt: serverNow() })
     .where(and(eq(tables.canners.id, cannerId), eq(tables.canners.householdId, id)))
     .returning()
   if (!canner) notFound('No such canner in this household.')
-  return withGaugeStatus(canner)
+  return withGaugeStatus(canner, today)
 })

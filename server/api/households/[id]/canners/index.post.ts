@@ -4,7 +4,8 @@ import { CannerSchema, withGaugeStatus } from '../../../../../utils/schemas/cata
 export default defineEventHandler(async (event) => {
   const { params: { id }, db } = await requireHouseholdRole(event, HouseholdParamsSchema, 'owner')
   const body = await validBody(event, CannerSchema)
-  const [canner] = await db.insert(tables.canners).values({ ...body, householdId: id }).returning()
+  const today = await cannerToday(db, id, body.lastGaugeTestAt)
+  const canner = written(await db.insert(tables.canners).values({ ...body, householdId: id }).returning())
   setResponseStatus(event, 201)
-  return withGaugeStatus(canner!)
+  return withGaugeStatus(canner, today)
 })

@@ -9,7 +9,7 @@ export default defineEventHandler(async (event) => {
   if (unknown) badInput(unknown.field, unknown.message)
   const [row] = await db.insert(tables.jarStock)
     .values({ householdId: id, jarSizeId: body.jarSizeId, count: body.count })
-    .onConflictDoUpdate({ target: [tables.jarStock.householdId, tables.jarStock.jarSizeId], set: { count: body.count, updatedAt: new Date() } })
+    .onConflictDoUpdate({ target: [tables.jarStock.householdId, tables.jarStock.jarSizeId], set: { count: body.count, updatedAt: serverNow() } })
     .returning()
   return { jarSizeId: row!.jarSizeId, count: row!.count }
 })

@@ -6,13 +6,13 @@ export default defineEventHandler(async (event) => {
   const { params: { id }, db, user } = await requireHouseholdRole(event, HouseholdParamsSchema, 'canner')
   const body = await validBody(event, PlanSaveSchema)
   const result = await computePlan(db, id, body.request)
-  const [plan] = await db.insert(tables.plans).values({
+  const plan = written(await db.insert(tables.plans).values({
     householdId: id,
     name: body.name,
     request: body.request,
     summary: planSummary(result),
     createdBy: user.id,
-  }).returning()
+  }).returning())
   setResponseStatus(event, 201)
   return { plan, result }
 })

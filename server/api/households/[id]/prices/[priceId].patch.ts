@@ -9,7 +9,7 @@ export default defineEventHandler(async (event) => {
   const unknown = unknownReference(columns, await loadCatalogue(db, id))
   if (unknown) badInput(unknown.field, unknown.message)
   const [item] = await db.update(tables.priceItems)
-    .set({ ...columns, updatedAt: new Date() })
+    .set({ ...columns, updatedAt: serverNow() })
     .where(and(eq(tables.priceItems.id, priceId), eq(tables.priceItems.householdId, id)))
     .returning()
   if (!item) notFound('No such item in this household\'s price list.')

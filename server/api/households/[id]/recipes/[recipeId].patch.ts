@@ -19,7 +19,7 @@ export default defineEventHandler(async (event) => {
     refusal(first!.message, first!.field)
   }
   await db.transaction(async (tx) => {
-    await tx.update(tables.recipes).set({ ...houseRecipeRow(body, built.base), updatedAt: new Date() }).where(eq(tables.recipes.id, recipeId))
+    await tx.update(tables.recipes).set({ ...houseRecipeRow(body, built.base), updatedAt: serverNow() }).where(eq(tables.recipes.id, recipeId))
     await tx.delete(tables.recipeJarSpecs).where(eq(tables.recipeJarSpecs.recipeId, recipeId))
     await tx.delete(tables.recipePressureBands).where(eq(tables.recipePressureBands.recipeId, recipeId))
     await tx.insert(tables.recipeJarSpecs).values(built.specs.map(s => ({ recipeId, ...s })))

@@ -3,13 +3,13 @@ import { HouseholdPlanParamsSchema } from '../../../../../../utils/schemas/param
 export default defineEventHandler(async (event) => {
   const { params: { id, planId }, db, user } = await requireHouseholdRole(event, HouseholdPlanParamsSchema, 'canner')
   const source = await requirePlan(db, id, planId)
-  const [plan] = await db.insert(tables.plans).values({
+  const plan = written(await db.insert(tables.plans).values({
     householdId: id,
     name: `Copy of ${source.name}`.slice(0, 80),
     request: source.request,
     summary: source.summary,
     createdBy: user.id,
-  }).returning()
+  }).returning())
   setResponseStatus(event, 201)
   return { plan }
 })

@@ -14,7 +14,7 @@ export default defineEventHandler(async (event) => {
       name: body.name ?? current.name,
       status: body.status ?? current.status,
       ...(body.request && result ? { request: body.request, summary: planSummary(result) } : {}),
-      updatedAt: new Date(),
+      updatedAt: serverNow(),
     })
     .where(eq(tables.plans.id, current.id))
     .returning()

@@ -1,0 +1,20 @@
+import type { UnitSystem } from '~/utils/planning'
+import type { ApiAnswer } from '~/utils/api'
+import { dataKeys } from '~/utils/dataKeys'
+import type { HouseholdSettingsInput } from '~/utils/schemas/household'
+
+export type HouseholdView = ApiAnswer<'/api/households/:id'>
+
+/** The active household's settings (name, altitude, units, store price) and saving them. */
+export function useHousehold() {
+  const auth = useAuth()
+  const { id, options } = useHouseholdRead(dataKeys.household)
+  const household = useFetch(() => `/api/households/${id.value}` as const, options)
+  const units = computed<UnitSystem>(() => household.data.value?.unitSystem ?? 'us')
+
+  async function save(values: HouseholdSettingsInput) {
+    await $fetch(`/api/households/${id.value}`, { method: 'PATCH', body: values })
+    await Promise.all([refreshNuxtData(dataKeys.household(id.value)), auth.refresh()])
+  }
+  return { id, household, units, save }
+}

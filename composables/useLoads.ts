@@ -1,0 +1,24 @@
+import type { ApiAnswer } from '~/utils/api'
+import { dataKeys } from '~/utils/dataKeys'
+import type { LoadCreateInput, LoadListQuery } from '~/utils/schemas/logbook'
+
+export type LoadPage = ApiAnswer<'/api/households/:id/loads'>
+export type LoadRow = LoadPage['rows'][number]
+export type LoadDetail = ApiAnswer<'/api/households/:id/loads/:loadId'>
+
+/** The keys whose answers change when a load is logged or its seal check recorded. */
+export const afterLoadKeys = (householdId: string | null) =>
+  [dataKeys.loads(householdId), dataKeys.board(householdId), dataKeys.shelf(householdId), dataKeys.jarStock(householdId), dataKeys.labels(householdId)]
+
+/** The Logbook: one page of the active household's loads (filtered and sorted), and logging a load. */
+export function useLoads(query: Ref<Partial<Record<keyof LoadListQuery, string | number | undefined>>>) {
+  const { id, options } = useHouseholdRead(dataKeys.loads)
+  const page = useFetch(() => `/api/households/${id.value}/loads` as const, { ...options, query })
+
+  async function create(body: LoadCreateInput) {
+    const load = await $fetch(`/api/households/${id.value}/loads`, { method: 'POST', body })
+    await refreshNuxtData(afterLoadKeys(id.value))
+    return load
+  }
+  return { ...page, create }
+}

@@ -1,0 +1,29 @@
+import type { PlanRequestBody } from '~/utils/schemas/plan'
+
+/**
+ * What the Batch planner works from, read once for both the new-plan and the saved-plan page:
+ * the Recipe book, the jar catalogue, the beans, the household's canners, settings and
+ * members, and the preview computation. `props` is what PlannerWorkspace takes.
+ */
+export function usePlanner() {
+  const { data: recipes } = useRecipes()
+  const { data: jarSizes } = useJarSizes()
+  const { data: ingredients } = useIngredients()
+  const { data: canners } = useCanners()
+  const { data: members } = useMembers()
+  const { household: { data: household }, units } = useHousehold()
+  const { preview } = usePlans()
+
+  const ready = computed(() => Boolean(recipes.value && jarSizes.value && ingredients.value))
+  const props = computed(() => ({
+    recipes: recipes.value ?? [],
+    jarSizes: jarSizes.value ?? [],
+    ingredients: ingredients.value ?? [],
+    canners: canners.value ?? null,
+    members: members.value ?? [],
+    household: household.value ?? null,
+    units: units.value,
+    onPreview: (body: PlanRequestBody) => preview(body),
+  }))
+  return { recipes, jarSizes, ready, props }
+}

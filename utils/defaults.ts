@@ -1,0 +1,34 @@
+/**
+ * Defaults a screen starts from, in one place. None of them names a catalogue row: they are
+ * read from the catalogue as it stands, so a change to the jar catalogue or the recipes needs
+ * no change here.
+ */
+
+/** Jars on the first line of a new plan: two loads of pints in a common 16-quart canner (common practice, no published source). */
+export const STARTER_JARS = 18
+/** Jars on a line added to a plan. */
+export const ADDED_LINE_JARS = 9
+
+interface CatalogueRecipe { id: string, status: string, ingredientId: string | null, processMinutes: ReadonlyArray<{ jarKey: string }> }
+interface CatalogueJar { id: string, sizeKey: string, mouth: string }
+
+/**
+ * The first line of a new plan: the first tested recipe of the Recipe book, in the first jar
+ * size of its process table (a regular-mouth jar where there is one), with its own bean.
+ */
+export function starterLine(recipes: readonly CatalogueRecipe[], jarSizes: readonly CatalogueJar[]) {
+  const recipe = recipes.find(r => r.status === 'tested') ?? recipes[0]
+  const jar = firstJarFor(recipe, jarSizes)
+  if (!recipe || !jar) return null
+  return { recipeId: recipe.id, jarSizeId: jar.id, ...(recipe.ingredientId ? { ingredientId: recipe.ingredientId } : {}), jars: STARTER_JARS }
+}
+
+/** The first jar of the catalogue in the first size a recipe's process table covers. */
+export function firstJarFor(recipe: CatalogueRecipe | undefined, jarSizes: readonly CatalogueJar[]): CatalogueJar | undefined {
+  const sizeKey = recipe?.processMinutes[0]?.jarKey
+  const inSize = jarSizes.filter(j => j.sizeKey === sizeKey)
+  return inSize.find(j => j.mouth === 'regular') ?? inSize[0] ?? jarSizes[0]
+}
+
+/** The largest photo a load takes, checked by the photo route and, to spare a slow upload, by the page. */
+export const MAX_PHOTO_BYTES = 8 * 1024 * 1024

@@ -1,0 +1,51 @@
+/** Formatting shared by several screens: jar size names, money, recipe cautions, fill shares. */
+
+/** "Pint", "Half-pint": the size family's name from the jar catalogue ("Pint, regular mouth"). */
+export function sizeName(jarSizes: ReadonlyArray<{ sizeKey: string, name: string }> | null | undefined, sizeKey: string): string {
+  const jar = jarSizes?.find(j => j.sizeKey === sizeKey)
+  return jar ? jar.name.split(',')[0]! : sizeKey
+}
+
+/** Money entered and shown in currency units; stored in cents. */
+export const centsToUnits = (cents: number): number => cents / 100
+export const unitsToCents = (units: number): number => Math.round(units * 100)
+export const formatMoney = (cents: number): string =>
+  (cents / 100).toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 })
+
+export const packStyleLabels = { dry: 'Dry pack (no soak)', hot: 'Hot pack', raw: 'Raw pack' } as const
+
+/** The caution text without its leading "Untested — your own risk." (shown as the title instead). */
+export function cautionBody(caution: string | undefined): string {
+  return (caution ?? '').replace(/^Untested — your own risk\.\s*/, '')
+}
+
+const SHARES: Array<[number, string]> = [[1 / 4, '¼'], [1 / 3, '⅓'], [1 / 2, '½'], [2 / 3, '⅔'], [3 / 4, '¾']]
+
+/** "¾ of the jar", "the whole jar", or a percentage for an unusual share. */
+export function fillShareText(fraction: number): string {
+  if (Math.abs(fraction - 1) < 1e-6) return 'the whole jar'
+  const named = SHARES.find(([value]) => Math.abs(value - fraction) < 1e-6)
+  return `${named ? named[1] : `${Math.round(fraction * 100)} %`} of the jar`
+}
+
+/**
+ * The name a load's jars get on the Shelf: the recipe's own name when the jars hold the recipe's
+ * own bean, otherwise the bean and the pack ("Pinto beans, hot pack") for a recipe that covers
+ * several varieties.
+ */
+export function shelfProductName(recipe: { name: string, ingredientId: string, packStyle: 'hot' | 'raw' | 'dry' }, bean: { id: string, name: string } | undefined): string {
+  if (!bean || bean.id === recipe.ingredientId) return recipe.name
+  return `${bean.name}, ${recipe.packStyle} pack`
+}
+
+/** A jar size as a table row says it: "pint", "pint (wide)", from the catalogue's own name. */
+export function jarShortName(jarSizes: ReadonlyArray<{ id: string, name: string, mouth: string }> | null | undefined, jarSizeId: string): string {
+  const jar = jarSizes?.find(j => j.id === jarSizeId)
+  if (!jar) return jarSizeId
+  return `${jar.name.split(',')[0]!.toLowerCase()}${jar.mouth === 'wide' ? ' (wide)' : ''}`
+}
+
+/** "87%", or a dash when there is nothing to rate yet. */
+export function percent(rate: number | null): string {
+  return rate === null ? '—' : `${Math.round(rate * 100)}%`
+}

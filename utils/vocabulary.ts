@@ -1,0 +1,62 @@
+/**
+ * Every enumerated value the product stores or sends, in one place: the database columns, the
+ * request schemas, the planning model and the pages all take their lists and types from here.
+ * Canning terms follow the trade's usage (dial gauge, weighted gauge, hot pack, raw pack).
+ */
+
+/** A member's role in a household, least to most. */
+export const roles = ['helper', 'canner', 'owner'] as const
+export type Role = (typeof roles)[number]
+/** How roles compare: a route that needs `canner` also admits `owner`. */
+export const roleRank: Record<Role, number> = { helper: 1, canner: 2, owner: 3 }
+
+export const unitSystems = ['us', 'metric'] as const
+export type UnitSystem = (typeof unitSystems)[number]
+
+export const gaugeTypes = ['dial', 'weighted'] as const
+export type GaugeType = (typeof gaugeTypes)[number]
+
+export const jarMouths = ['regular', 'wide'] as const
+export type JarMouth = (typeof jarMouths)[number]
+
+/** Dry goods (beans, lentils) or fresh produce. */
+export const ingredientForms = ['dry', 'fresh'] as const
+export type IngredientForm = (typeof ingredientForms)[number]
+
+/** A published, tested recipe, or a household's own untested (house) recipe. */
+export const recipeStatuses = ['tested', 'house'] as const
+export type RecipeStatus = (typeof recipeStatuses)[number]
+
+export const packStyles = ['hot', 'raw', 'dry'] as const
+export type PackStyle = (typeof packStyles)[number]
+
+/** 'published': the recipe gives the dry amount per jar; 'cap': the swell cap sets it. */
+export const fillBases = ['cap', 'published'] as const
+export type FillBasis = (typeof fillBases)[number]
+
+export const priceKinds = ['ingredient', 'salt', 'lid', 'jar', 'vinegar'] as const
+export type PriceKind = (typeof priceKinds)[number]
+
+export const planStatuses = ['planned', 'in-progress', 'done'] as const
+export type PlanStatus = (typeof planStatuses)[number]
+/** Plans still being worked through, shown on the Pantry board. */
+export const openPlanStatuses = ['planned', 'in-progress'] as const satisfies readonly PlanStatus[]
+
+/** 'pending': a reprocessing load waiting to be run. */
+export const loadStatuses = ['done', 'pending'] as const
+export type LoadStatus = (typeof loadStatuses)[number]
+
+export const unsealedActions = ['refrigerate', 'reprocess'] as const
+export type UnsealedAction = (typeof unsealedActions)[number]
+
+export const sealCheckStatuses = ['cooling', 'due', 'overdue'] as const
+export type SealCheckStatus = (typeof sealCheckStatuses)[number]
+
+export const bestByStatuses = ['past', 'near', 'ok'] as const
+export type BestByStatus = (typeof bestByStatuses)[number]
+
+export const shelfSources = ['seal-check', 'import'] as const
+export const reminderKinds = ['seal-check'] as const
+
+export const imageTypes = ['image/jpeg', 'image/png', 'image/webp'] as const
+export type ImageType = (typeof imageTypes)[number]
