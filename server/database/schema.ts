@@ -68,6 +68,16 @@ export const memberships = pgTable('memberships', {
 // ---------------------------------------------------------------------------
 // Published reference data (shared by every household). Sources live in columns.
 
+/**
+ * Which version of the published reference data (jar sizes, ingredients, tested recipes and
+ * their tables) this database holds; a newer version shipped with the code is applied at start.
+ */
+export const referenceData = pgTable('reference_data', {
+  name: text('name').primaryKey(),
+  version: integer('version').notNull(),
+  appliedAt: timestamp('applied_at', { withTimezone: true }).notNull().defaultNow(),
+})
+
 export const jarSizes = pgTable('jar_sizes', {
   id: text('id').primaryKey(),
   /** Size family used by process tables: half-pint, pint, pint-and-a-half, quart, half-gallon. */

@@ -1,25 +1,57 @@
-import { count } from 'drizzle-orm'
+import { count, eq, getTableColumns, inArray, sql } from 'drizzle-orm'
+import type { PgTable } from 'drizzle-orm/pg-core'
 import type { Database } from '../../utils/database'
 import * as t from '../schema'
-import { ingredientSeed, jarSizeSeed, recipePressureBandSeed, recipeSeed } from './reference'
+import { ingredientSeed, jarSizeSeed, recipePressureBandSeed, recipeSeed, REFERENCE_VERSION } from './reference'
 import { seedDemoHousehold } from './demo'
 import { seedDemoSeason } from './demo-season'
 
+type Tx = Parameters<Parameters<Database['transaction']>[0]>[0]
+
+/** `set` for an upsert: every column the seed rows give, except the key, takes the incoming value. */
+function incoming(table: PgTable, rows: ReadonlyArray<Record<string, unknown>>, key: string) {
+  const columns = getTableColumns(table) as Record<string, { name: string }>
+  const given = new Set(rows.flatMap(row => Object.keys(row)))
+  given.delete(key)
+  return Object.fromEntries([...given].map(k => [k, sql.raw(`excluded."${columns[k]!.name}"`)]))
+}
+
+async function applyReference(tx: Tx): Promise<void> {
+  const recipeRows = recipeSeed.map(({ jarSpecs: _specs, ...recipe }) => recipe)
+  await tx.insert(t.jarSizes).values(jarSizeSeed).onConflictDoUpdate({ target: t.jarSizes.id, set: incoming(t.jarSizes, jarSizeSeed, 'id') })
+  await tx.insert(t.ingredients).values(ingredientSeed).onConflictDoUpdate({ target: t.ingredients.id, set: incoming(t.ingredients, ingredientSeed, 'id') })
+  await tx.insert(t.recipes).values(recipeRows).onConflictDoUpdate({ target: t.recipes.id, set: incoming(t.recipes, recipeRows, 'id') })
+  // A published recipe's tables are replaced whole, so a row the correction removes goes too.
+  const ids = recipeSeed.map(r => r.id)
+  await tx.delete(t.recipeJarSpecs).where(inArray(t.recipeJarSpecs.recipeId, ids))
+  await tx.delete(t.recipePressureBands).where(inArray(t.recipePressureBands.recipeId, ids))
+  await tx.insert(t.recipeJarSpecs).values(recipeSeed.flatMap(r => r.jarSpecs.map(s => ({ recipeId: r.id, ...s }))))
+  await tx.insert(t.recipePressureBands).values(recipePressureBandSeed)
+}
+
 /**
- * Insert the published reference data. Idempotent: rows already present (by id) are left as
- * they are, so a restart never duplicates rows and never overwrites an admin's edits.
+ * Bring the published reference data up to `REFERENCE_VERSION`. A database holding an older
+ * version (or none: a new database, or one from before versioning) gets every published row as
+ * shipped, replacing what it held, so a correction reaches existing households. At the current
+ * version nothing is overwritten (an admin's edit stands) and only missing rows are added. The
+ * version row is locked for the transaction, so two servers starting at once apply it once.
+ * Answers whether a new version was applied.
  */
-export async function seedReference(db: Database): Promise<void> {
-  await db.transaction(async (tx) => {
+export async function seedReference(db: Database): Promise<boolean> {
+  return db.transaction(async (tx) => {
+    await tx.insert(t.referenceData).values({ name: 'published', version: 0 }).onConflictDoNothing()
+    const [held] = await tx.select().from(t.referenceData).where(eq(t.referenceData.name, 'published')).for('update')
+    if ((held?.version ?? 0) < REFERENCE_VERSION) {
+      await applyReference(tx)
+      await tx.update(t.referenceData).set({ version: REFERENCE_VERSION, appliedAt: new Date() }).where(eq(t.referenceData.name, 'published'))
+      return true
+    }
     await tx.insert(t.jarSizes).values(jarSizeSeed).onConflictDoNothing()
     await tx.insert(t.ingredients).values(ingredientSeed).onConflictDoNothing()
-    await tx.insert(t.recipes)
-      .values(recipeSeed.map(({ jarSpecs: _specs, ...recipe }) => recipe))
-      .onConflictDoNothing()
-    await tx.insert(t.recipeJarSpecs)
-      .values(recipeSeed.flatMap(r => r.jarSpecs.map(s => ({ recipeId: r.id, ...s }))))
-      .onConflictDoNothing()
+    await tx.insert(t.recipes).values(recipeSeed.map(({ jarSpecs: _specs, ...recipe }) => recipe)).onConflictDoNothing()
+    await tx.insert(t.recipeJarSpecs).values(recipeSeed.flatMap(r => r.jarSpecs.map(s => ({ recipeId: r.id, ...s })))).onConflictDoNothing()
     await tx.insert(t.recipePressureBands).values(recipePressureBandSeed).onConflictDoNothing()
+    return false
   })
 }
 

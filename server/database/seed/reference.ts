@@ -4,7 +4,15 @@
  * Sources: ../shared/reference/canning-reference.md (USDA Complete Guide to Home Canning,
  * AIB 539, rev. 2015 — "CG"; MSU Extension "Preserving Food Safely" reprints; USDA SR Legacy).
  */
-import type { GaugeType, recipeJarSpecs, recipes } from '../schema'
+import type { GaugeType } from '../../../utils/vocabulary'
+import type { recipeJarSpecs, recipes } from '../schema'
+
+/**
+ * The version of the reference data below. Raise it with every correction of a published value
+ * (a process time, a pressure band, a jar's capacity): a database holding an older version gets
+ * the corrected rows at the next start, in one transaction.
+ */
+export const REFERENCE_VERSION = 1
 
 const INCH_MM = 25.4
 const POUND_G = 453.59237

@@ -1,11 +1,11 @@
 import { PGlite } from '@electric-sql/pglite'
-import { count, eq } from 'drizzle-orm'
+import { and, count, eq } from 'drizzle-orm'
 import { drizzle } from 'drizzle-orm/pglite'
 import { migrate } from 'drizzle-orm/pglite/migrator'
 import { beforeAll, describe, expect, it } from 'vitest'
 import * as schema from '../../../server/database/schema'
 import { seedDemoIfEmpty, seedReference } from '../../../server/database/seed'
-import { recipeSeed } from '../../../server/database/seed/reference'
+import { recipeSeed, REFERENCE_VERSION } from '../../../server/database/seed/reference'
 import type { Database } from '../../../server/utils/database'
 
 let db: Database
@@ -20,6 +20,39 @@ async function rowCounts() {
   const tables = [schema.jarSizes, schema.ingredients, schema.recipes, schema.recipeJarSpecs, schema.recipePressureBands]
   return Promise.all(tables.map(async t => (await db.select({ n: count() }).from(t))[0]!.n))
 }
+
+/** Minutes for dried beans, hot pack, pints, as the database holds them. */
+async function beanPintMinutes() {
+  const [row] = await db.select({ m: schema.recipeJarSpecs.processMinutes }).from(schema.recipeJarSpecs)
+    .where(and(eq(schema.recipeJarSpecs.recipeId, 'usda-dried-beans-hot-pack'), eq(schema.recipeJarSpecs.sizeKey, 'pint')))
+  return row?.m
+}
+
+describe('reference data versions', () => {
+  // USDA Complete Guide, Guide 4, "Beans or peas – shelled, dried": hot pack pints 75 minutes.
+  it('records the version it applied', async () => {
+    const [row] = await db.select().from(schema.referenceData).where(eq(schema.referenceData.name, 'published'))
+    expect(row?.version).toBe(REFERENCE_VERSION)
+    expect(await beanPintMinutes()).toBe(75)
+  })
+
+  it('leaves an edit at the current version alone, and puts published values right when a newer version arrives', async () => {
+    await db.update(schema.recipeJarSpecs).set({ processMinutes: 40 })
+      .where(and(eq(schema.recipeJarSpecs.recipeId, 'usda-dried-beans-hot-pack'), eq(schema.recipeJarSpecs.sizeKey, 'pint')))
+    await db.insert(schema.recipePressureBands).values({ recipeId: 'usda-dried-beans-hot-pack', gaugeType: 'dial', minFt: 90_000, maxFt: 99_000, psi: 3, source: 'a stray row no published table has' })
+    expect(await seedReference(db)).toBe(false)
+    expect(await beanPintMinutes()).toBe(40)
+
+    // A database that still holds the previous version, as an existing household's would.
+    await db.update(schema.referenceData).set({ version: REFERENCE_VERSION - 1 })
+    expect(await seedReference(db)).toBe(true)
+    expect(await beanPintMinutes()).toBe(75)
+    const stray = await db.select().from(schema.recipePressureBands).where(eq(schema.recipePressureBands.minFt, 90_000))
+    expect(stray).toHaveLength(0)
+    const [row] = await db.select().from(schema.referenceData).where(eq(schema.referenceData.name, 'published'))
+    expect(row?.version).toBe(REFERENCE_VERSION)
+  })
+})
 
 describe('reference seed', () => {
   it('is idempotent: seeding again adds no rows', async () => {
