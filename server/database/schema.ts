@@ -78,6 +78,19 @@ export const referenceData = pgTable('reference_data', {
   appliedAt: timestamp('applied_at', { withTimezone: true }).notNull().defaultNow(),
 })
 
+/**
+ * What a reference version changed in this database: one row per changed value, so a saved plan
+ * computed before the change can say what changed when it is opened. `recipeId` is null for a
+ * change that touches every recipe (a jar size, an ingredient).
+ */
+export const referenceChanges = pgTable('reference_changes', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  version: integer('version').notNull(),
+  recipeId: text('recipe_id'),
+  what: text('what').notNull(),
+  appliedAt: timestamp('applied_at', { withTimezone: true }).notNull().defaultNow(),
+}, t => [index('reference_changes_applied_idx').on(t.appliedAt)])
+
 export const jarSizes = pgTable('jar_sizes', {
   id: text('id').primaryKey(),
   /** Size family used by process tables: half-pint, pint, pint-and-a-half, quart, half-gallon. */

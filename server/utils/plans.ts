@@ -1,4 +1,4 @@
-import { and, eq } from 'drizzle-orm'
+import { and, asc, eq, gt, inArray, isNull, or } from 'drizzle-orm'
 import { planBatch, PlanningRefusal, type PlanLineRequest, type PlanResult } from '../../utils/planning'
 import type { PlanLineBody, PlanRequestBody } from '../../utils/schemas/plan'
 import { loadCanners, loadCatalogue, loadHouseholdSettings, toPlanningCanner } from './catalogue'
@@ -97,4 +97,16 @@ export function planSummary(result: PlanResult) {
     loads: result.totals.loads,
     recipes: [...new Set(result.lines.map(l => l.recipeName))],
   }
+}
+
+/**
+ * Published values corrected since a plan was last saved that touch its recipes (or every
+ * recipe: a jar size, an ingredient), so the plan can say what changed when it is opened.
+ */
+export async function referenceChangesSince(db: Database, plan: { updatedAt: Date, request: PlanRequestBody }): Promise<string[]> {
+  const recipeIds = plan.request.lines.map(l => l.recipeId)
+  const rows = await db.select({ what: tables.referenceChanges.what }).from(tables.referenceChanges)
+    .where(and(gt(tables.referenceChanges.appliedAt, plan.updatedAt), or(isNull(tables.referenceChanges.recipeId), inArray(tables.referenceChanges.recipeId, recipeIds))))
+    .orderBy(asc(tables.referenceChanges.appliedAt))
+  return rows.map(r => r.what)
 }

@@ -3,9 +3,10 @@
  * and the Logbook page read times in the household's zone, whatever zone the server or the
  * browser is in.
  *
- * Outside facts used (IANA time zone database): America/Phoenix keeps Mountain Standard Time,
- * UTC−7, all year (Arizona does not observe daylight saving time), so its wall clock is the UTC
- * clock less 7 hours on every date this test can run on.
+ * Outside facts used: America/Denver keeps Mountain Standard Time, UTC−7 ("MST"), and Mountain
+ * Daylight Time, UTC−6 ("MDT"), from 2:00 local time on the second Sunday of March to 2:00 on
+ * the first Sunday of November (US Energy Policy Act of 2005, §110; IANA time zone database).
+ * The expected wall clock is worked out here by that rule, not with the app's helpers.
  */
 import { simpleParser } from 'mailparser'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
@@ -13,8 +14,7 @@ import { launchBrowser, screenshot, signIn, visible } from '../support/browser'
 import { ApiClient, expectField, startServer, type RunningServer } from '../support/server'
 
 const H = 3_600_000
-const ZONE = 'America/Phoenix'
-const UTC_OFFSET_HOURS = -7
+const ZONE = 'America/Denver'
 const EMAIL = 'ilse@example.org'
 const PASSWORD = 'tepary-beans-2026'
 
@@ -23,13 +23,27 @@ let client: ApiClient
 let hid: string
 let cannerId: string
 
-/** "7:00 PM" for the Phoenix wall clock of a whole-hour UTC instant, worked out by hand. */
-function phoenixClock(at: Date): string {
-  const hour = (at.getUTCHours() + 24 + UTC_OFFSET_HOURS) % 24
-  return `${hour % 12 === 0 ? 12 : hour % 12}:00 ${hour < 12 ? 'AM' : 'PM'}`
+/** The nth Sunday of a month (0-based month), as a UTC date. */
+function nthSunday(year: number, month: number, n: number): number {
+  const first = new Date(Date.UTC(year, month, 1)).getUTCDay()
+  return 1 + ((7 - first) % 7) + (n - 1) * 7
 }
-/** The Phoenix calendar date of an instant, by hand. */
-const phoenixDate = (at: Date) => new Date(at.getTime() + UTC_OFFSET_HOURS * H).toISOString().slice(0, 10)
+/** Denver's offset from UTC at an instant, in hours, by the US daylight-saving rule. */
+function denverOffset(at: Date): -6 | -7 {
+  const year = at.getUTCFullYear()
+  // 2:00 MST on the second Sunday of March is 09:00 UTC; 2:00 MDT on the first Sunday of November is 08:00 UTC.
+  const starts = Date.UTC(year, 2, nthSunday(year, 2, 2), 9)
+  const ends = Date.UTC(year, 10, nthSunday(year, 10, 1), 8)
+  return at.getTime() >= starts && at.getTime() < ends ? -6 : -7
+}
+/** "7:00 PM MST" for Denver's wall clock of a whole-hour UTC instant. */
+function denverClock(at: Date): string {
+  const offset = denverOffset(at)
+  const hour = (at.getUTCHours() + 24 + offset) % 24
+  return `${hour % 12 === 0 ? 12 : hour % 12}:00 ${hour < 12 ? 'AM' : 'PM'} ${offset === -6 ? 'MDT' : 'MST'}`
+}
+/** Denver's calendar date of an instant. */
+const denverDate = (at: Date) => new Date(at.getTime() + denverOffset(at) * H).toISOString().slice(0, 10)
 const wholeHour = (ms: number) => new Date(Math.floor(ms / H) * H)
 
 beforeAll(async () => {
@@ -38,7 +52,7 @@ beforeAll(async () => {
   const bad = await new ApiClient(server.url).post('/api/auth/register', { email: 'nowhere@example.org', password: PASSWORD, name: 'N', householdName: 'N', timeZone: 'Atlantis/Central' })
   expect(bad.status).toBe(400)
   expectField(bad, 'timeZone', /time zone/)
-  const reg = await client.post('/api/auth/register', { email: EMAIL, password: PASSWORD, name: 'Ilse Marchetti', householdName: 'Marchetti dry wash', timeZone: ZONE })
+  const reg = await client.post('/api/auth/register', { email: EMAIL, password: PASSWORD, name: 'Ilse Marchetti', householdName: 'Marchetti mesa kitchen', timeZone: ZONE })
   expect(reg.status).toBe(201)
   hid = reg.body.households[0].id
   const canner = await client.post(`/api/households/${hid}/canners`, { name: 'Weighted canner', innerDiameterMm: 310, usableHeightMm: 330, rackThicknessMm: 6, gaugeType: 'weighted', maxLayers: 2, waterDepthMm: 76 })
@@ -75,12 +89,12 @@ describe('the household time zone', () => {
   })
 
   it('filters the Logbook by the household\'s calendar date, not the server\'s', async () => {
-    // 03:00 UTC two days ago is 20:00 the evening before in Phoenix.
+    // 03:00 UTC two days ago is 20:00 or 21:00 the evening before in Denver.
     const day = new Date(Date.now() - 48 * H).toISOString().slice(0, 10)
     const startedAt = new Date(`${day}T03:00:00Z`)
     const load = await logLoad(startedAt, new Date(startedAt.getTime() + 2 * H))
     expect(load.status).toBe(201)
-    const local = phoenixDate(startedAt)
+    const local = denverDate(startedAt)
     expect(local).not.toBe(day)
     const onLocalDay = await client.get(`/api/households/${hid}/loads?from=${local}&to=${local}`)
     expect(onLocalDay.body.rows.map((r: { id: string }) => r.id)).toContain(load.body.id)
@@ -100,7 +114,7 @@ describe('the household time zone', () => {
       else await new Promise(r => setTimeout(r, 200))
     }
     expect(reminder, 'a reminder e-mail').toBeDefined()
-    expect(reminder!.text).toContain(`${phoenixClock(endedAt)} MST`)
+    expect(reminder!.text).toContain(denverClock(endedAt))
   })
 
   it('shows the Logbook in the household\'s time in a browser set to another zone', async () => {
@@ -113,7 +127,7 @@ describe('the household time zone', () => {
       const page = await context.newPage()
       await signIn(page, server.url, EMAIL, PASSWORD)
       await page.goto(`${server.url}/logbook/${load.body.id}`, { waitUntil: 'networkidle' })
-      await page.getByText(phoenixClock(startedAt)).first().waitFor()
+      await page.getByText(denverClock(startedAt).replace(/ M[SD]T$/, '')).first().waitFor()
       await screenshot(page, 'time-zone-logbook-phone')
       await page.goto(`${server.url}/logbook/new`, { waitUntil: 'networkidle' })
       expect(await visible(page.getByText(`Your household's time (${ZONE})`))).toBe(true)

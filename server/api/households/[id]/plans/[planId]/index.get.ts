@@ -7,12 +7,13 @@ import { HouseholdPlanParamsSchema } from '../../../../../../utils/schemas/param
 export default defineEventHandler(async (event) => {
   const { params: { id, planId }, db } = await requireHouseholdRole(event, HouseholdPlanParamsSchema, 'helper')
   const plan = await requirePlan(db, id, planId)
+  const referenceChanges = await referenceChangesSince(db, plan)
   try {
-    return { plan, result: await computePlan(db, id, plan.request), refusal: null }
+    return { plan, referenceChanges, result: await computePlan(db, id, plan.request), refusal: null }
   }
   catch (error) {
     const status = (error as { statusCode?: number }).statusCode
     if (status !== 422) throw error
-    return { plan, result: null, refusal: { message: (error as Error).message, field: (error as { data?: { field?: string } }).data?.field ?? null } }
+    return { plan, referenceChanges, result: null, refusal: { message: (error as Error).message, field: (error as { data?: { field?: string } }).data?.field ?? null } }
   }
 })
