@@ -11,18 +11,19 @@ const double = (min: number, max: number) => fc.double({ min, max, noNaN: true, 
 
 describe('fill', () => {
   test.prop([double(50, 4000), double(0.05, 1), double(1, 6), fc.option(double(-10, 3000), { nil: undefined })])(
-    'the cap is never exceeded: any request above it is refused',
+    'the cap is never exceeded: a request within it is planned as asked, one above it (or not above 0) is refused',
     (capacityMl, f, E, ask) => {
       const jar = { ...pint, capacityMl }
       const recipe = { ...dryPack, solidsFillFraction: f }
       const bean = { ...blackBeans, expansionRatio: E }
-      try {
-        const fill = perJarFill(recipe, jar, bean, jarSizes, { dryMlPerJar: ask }, 'l')
-        expect(fill.dryMl).toBeLessThanOrEqual(fill.capMl * (1 + 1e-9))
-      }
-      catch (e) {
-        expect(e).toBeInstanceOf(PlanningRefusal)
-      }
+      const cap = perJarFill(recipe, jar, bean, jarSizes, {}, 'l')
+      expect(cap.dryMl).toBeCloseTo(cap.capMl, 9)
+      // The cap is d_max = f · V / E (shared/design/computation.md §1).
+      expect(cap.capMl).toBeCloseTo(capacityMl * f / E, 6)
+      if (ask === undefined) return
+      const fill = () => perJarFill(recipe, jar, bean, jarSizes, { dryMlPerJar: ask }, 'l')
+      if (ask <= 0 || ask > cap.capMl * (1 + 1e-6)) expect(fill).toThrow(PlanningRefusal)
+      else if (ask < cap.capMl * (1 - 1e-6)) expect(fill().dryMl).toBe(ask)
     },
   )
 })
@@ -189,6 +190,28 @@ describe('refusals', () => {
         if (!(e instanceof PlanningRefusal)) throw e
         expect(e.message.trim().length).toBeGreaterThan(0)
       }
+    },
+  )
+
+  // Valid by construction: a published recipe in a jar size its table covers, a sensible jar
+  // count, one ordinary canner, an altitude inside the published bands (USDA Complete Guide,
+  // Guide 4, Table 1: dial-gauge pressures are published up to 8,000 ft). These must plan.
+  const tested = catalogue.recipes.filter(r => r.status === 'tested')
+  const validLine: fc.Arbitrary<PlanLineRequest> = fc.constantFrom(...tested).chain((recipe) => {
+    const sizes = catalogue.jarSizes.filter(j => recipe.processMinutes.some(p => p.jarKey === j.key))
+    return fc.record({
+      recipeId: fc.constant(recipe.id),
+      jarSizeId: fc.constantFrom(...sizes.map(j => j.id)),
+      amount: fc.record({ mode: fc.constant('jars' as const), jars: fc.integer({ min: 1, max: 60 }) }),
+    })
+  })
+  test.prop([fc.array(validLine, { minLength: 1, maxLength: 3 }), fc.integer({ min: 0, max: 8000 }), fc.constantFrom('dial' as const, 'weighted' as const)], { numRuns: 200 })(
+    'valid requests are planned, with every jar asked for in some load',
+    (lines, altitudeFt, gaugeType) => {
+      const request: PlanRequest = { lines, canners: [{ ...standardCanner, gaugeType, lastGaugeTestAt: TODAY }], altitudeFt, today: TODAY, startAt: `${TODAY}T08:00` }
+      const r = planBatch(request, catalogue, household)
+      const asked = lines.reduce((s, l) => s + (l.amount.mode === 'jars' ? l.amount.jars : 0), 0)
+      expect(r.totals.jars).toBe(asked)
     },
   )
 })
