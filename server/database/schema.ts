@@ -14,6 +14,7 @@ import {
   uuid,
   type AnyPgColumn,
 } from 'drizzle-orm/pg-core'
+import { DEFAULT_COOL_DOWN } from '../../utils/planning/schedule'
 import type { PlanRequestBody } from '../../utils/schemas/plan'
 import {
   fillBases, gaugeTypes, imageTypes, ingredientForms, jarMouths, loadStatuses, packStyles, planStatuses, priceKinds,
@@ -46,8 +47,8 @@ export const households = pgTable('households', {
   storeCanPriceCents: integer('store_can_price_cents').notNull().default(129),
   /** How many canning seasons a jar is expected to serve; jar cost is spread over them. */
   jarUses: integer('jar_uses').notNull().default(10),
-  coolDownPintMinutes: integer('cool_down_pint_minutes').notNull().default(30),
-  coolDownQuartMinutes: integer('cool_down_quart_minutes').notNull().default(45),
+  coolDownPintMinutes: integer('cool_down_pint_minutes').notNull().default(DEFAULT_COOL_DOWN.pint),
+  coolDownQuartMinutes: integer('cool_down_quart_minutes').notNull().default(DEFAULT_COOL_DOWN.quart),
   bestByMonths: integer('best_by_months').notNull().default(12),
   /** IANA time zone the household's dates and times are read in ("America/Denver"). */
   timeZone: text('time_zone').notNull().default('UTC'),

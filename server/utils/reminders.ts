@@ -14,13 +14,15 @@ async function recipientsOf(db: Database, householdId: string): Promise<string[]
 export async function sealReminderMessage(db: Database, loadId: string) {
   const [load] = await db.select().from(tables.canningLoads).where(eq(tables.canningLoads.id, loadId))
   if (!load?.endedAt) return null
-  const lines = await db.select().from(tables.loadLines).where(eq(tables.loadLines.loadId, loadId))
+  const lines = await db.select({ jars: tables.loadLines.jars, product: tables.loadLines.product, jarName: tables.jarSizes.name })
+    .from(tables.loadLines).innerJoin(tables.jarSizes, eq(tables.jarSizes.id, tables.loadLines.jarSizeId))
+    .where(eq(tables.loadLines.loadId, loadId)).orderBy(tables.loadLines.lineIndex)
   // Times in the mail are the household's own, with the zone's abbreviation ("7:30 PM MST").
   const zone = await householdTimeZone(db, load.householdId)
   const when = (d: Date) => formatDateTimeLong(d, zone)
   const window = sealWindow(load.endedAt, load.endedAt)
   const code = loadCode(load.number)
-  const jars = lines.map(l => `${l.jars} × ${l.product} (${l.jarSizeId.replace(/-/g, ' ')})`)
+  const jars = lines.map(l => `${l.jars} × ${l.product} (${l.jarName})`)
   const link = `${publicUrl()}/logbook/${load.id}`
   const text = [
     `Load ${code} came out of ${load.cannerName} on ${when(load.endedAt)}:`,
