@@ -15,8 +15,8 @@ export const HouseholdLoadParamsSchema = z.object({ id: uuid('household'), loadI
 export const HouseholdPhotoParamsSchema = z.object({ id: uuid('household'), photoId: uuid('photo') })
 
 export const LoadLineSchema = z.object({
-  recipeId: z.string({ required_error: 'Choose the recipe.' }).min(1, 'Choose the recipe.').max(120),
-  jarSizeId: z.string({ required_error: 'Choose the jar size.' }).min(1, 'Choose the jar size.').max(60),
+  recipeId: z.string({ required_error: 'Choose the recipe.', invalid_type_error: 'Choose the recipe.' }).min(1, 'Choose the recipe.').max(120),
+  jarSizeId: z.string({ required_error: 'Choose the jar size.', invalid_type_error: 'Choose the jar size.' }).min(1, 'Choose the jar size.').max(60),
   jars: wholeNumber('Enter the number of jars.').min(1, 'A line holds at least 1 jar.').max(60, 'No home canner holds more than 60 jars in one load.'),
   /** The product as it should read on the Shelf; defaults to the recipe's name. */
   product: z.string().trim().max(120, 'Keep the product name under 120 characters.').optional(),

@@ -161,7 +161,12 @@ describe('goods and consumption', () => {
     const eaten = { mode: 'consumption' as const, jarsPerMonth: 4, months: 6, jarsOnShelf: 4 }
     const r = plan(request([{ recipeId: dryPack.id, jarSizeId: pint.id, amount: eaten }]))
     expect(r.totals.jars).toBe(20)
+    // computation.md §6: (store can price − cost per jar) × jars eaten a month × 12. The cost per
+    // jar is taken from the plan's rounded total, so allow the 2 ¢ that rounding can move it.
+    const expected = (household.storeCanPriceCents - r.cost.total / r.totals.jars) * 4 * 12
     expect(r.cost.savingPerYear).not.toBeNull()
+    expect(Math.abs(r.cost.savingPerYear! - expected)).toBeLessThanOrEqual(2)
+    expect(r.cost.savingPerYear!).toBeGreaterThan(0)
   })
 })
 
