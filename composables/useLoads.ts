@@ -15,10 +15,16 @@ export function useLoads(query: Ref<Partial<Record<keyof LoadListQuery, string |
   const { id, options } = useHouseholdRead(dataKeys.loads)
   const page = useFetch(() => `/api/households/${id.value}/loads` as const, { ...options, query })
 
+  return { ...page, create: useLogLoad().create }
+}
+
+/** Logging a load, for a page that does not show the Logbook (no list is fetched). */
+export function useLogLoad() {
+  const id = useAuth().activeId
   async function create(body: LoadCreateInput) {
     const load = await $fetch(`/api/households/${id.value}/loads`, { method: 'POST', body })
     await refreshNuxtData(afterLoadKeys(id.value))
     return load
   }
-  return { ...page, create }
+  return { create }
 }

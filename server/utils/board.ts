@@ -13,9 +13,9 @@ import { listShelf } from './shelf'
  */
 export async function pantryBoard(db: Database, householdId: string) {
   const now = serverNow()
-  const [zone, shelf, checks, rates, plans, lots, moves] = await Promise.all([
-    householdTimeZone(db, householdId),
-    listShelf(db, householdId),
+  const zone = await householdTimeZone(db, householdId)
+  const [shelf, checks, rates, plans, lots, moves] = await Promise.all([
+    listShelf(db, householdId, zone),
     loadsAwaitingCheck(db, householdId),
     sealRates(db, householdId),
     db.select({ id: tables.plans.id, name: tables.plans.name, status: tables.plans.status, summary: tables.plans.summary, updatedAt: tables.plans.updatedAt })

@@ -11,8 +11,8 @@ import { fridgeList } from './sealCheck'
 type Tx = Parameters<Parameters<Database['transaction']>[0]>[0]
 
 /** The Shelf: lots with jars left, oldest first, each with its best-by status; the refrigerator list; the last undoable take-off. */
-export async function listShelf(db: Database, householdId: string) {
-  const today = householdToday(await householdTimeZone(db, householdId))
+export async function listShelf(db: Database, householdId: string, zone?: string) {
+  const today = householdToday(zone ?? await householdTimeZone(db, householdId))
   const rows = await db.select({ lot: tables.shelfLots, jarSizeName: tables.jarSizes.name })
     .from(tables.shelfLots)
     .innerJoin(tables.jarSizes, eq(tables.jarSizes.id, tables.shelfLots.jarSizeId))
