@@ -4,7 +4,7 @@ import { defineConfig } from 'drizzle-kit'
 // (server/utils/database.ts). Never point drizzle-kit at a running app's data directory.
 export default defineConfig({
   dialect: 'postgresql',
-  schema: './server/database/schema.ts',
+  schema: './server/database/schema/index.ts',
   out: './server/database/migrations',
   casing: 'snake_case',
 })

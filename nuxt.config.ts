@@ -25,10 +25,8 @@ export default defineNuxtConfig({
     },
   },
   css: ['~/assets/css/main.css'],
+  // Only what modules read themselves; the server's own settings come from server/utils/settings.ts.
   runtimeConfig: {
-    dataDir: '',
-    databaseUrl: '',
-    demo: '',
     session: { maxAge: 60 * 60 * 24 * 14 },
   },
   nitro: {

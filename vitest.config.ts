@@ -1,5 +1,9 @@
+import { fileURLToPath } from 'node:url'
 import { defineConfig } from 'vitest/config'
 import { defineVitestProject } from '@nuxt/test-utils/config'
+
+// The same root alias Nuxt gives app and server code (`~~/utils/…`), for the plain node projects.
+const alias = { '~~': fileURLToPath(new URL('.', import.meta.url)) }
 
 // Three projects: pure unit tests (node), component tests (nuxt environment),
 // and end-to-end tests against the built server in .output (see scripts/test.mjs).
@@ -7,6 +11,7 @@ export default defineConfig({
   test: {
     projects: [
       {
+        resolve: { alias },
         test: {
           name: 'unit',
           include: ['tests/unit/**/*.test.ts'],
@@ -22,6 +27,7 @@ export default defineConfig({
         },
       }),
       {
+        resolve: { alias },
         test: {
           name: 'e2e',
           include: ['tests/e2e/**/*.test.ts'],

@@ -17,7 +17,7 @@ export function apiError(error: unknown): { message: string, field: string | nul
 }
 
 /** The server names fields "lines.0.jars"; vee-validate keys them "lines[0].jars". */
-export const formPath = (field: string) => field.replace(/\.(\d+)(?=\.|$)/g, '[$1]')
+const formPath = (field: string) => field.replace(/\.(\d+)(?=\.|$)/g, '[$1]')
 
 /**
  * A vee-validate form on the same zod schema the API route uses. `submit(fn)` runs `fn` with

@@ -5,7 +5,9 @@
  */
 
 /** Jars on the first line of a new plan: two loads of pints in a common 16-quart canner (common practice, no published source). */
-export const STARTER_JARS = 18
+const STARTER_JARS = 18
+/** Best-by months for a new household: "use within about a year" (OSU EM 9435). */
+export const DEFAULT_BEST_BY_MONTHS = 12
 /** Jars on a line added to a plan. */
 export const ADDED_LINE_JARS = 9
 

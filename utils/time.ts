@@ -80,11 +80,6 @@ export function formatDateTimeLong(value: string | Date, zone: string): string {
   return new Date(value).toLocaleString('en-US', { weekday: 'long', month: 'long', day: 'numeric', hour: 'numeric', minute: '2-digit', timeZoneName: 'short', timeZone: zone })
 }
 
-/** "7:30 PM" in `zone`. */
-export function formatTime(value: string | Date, zone: string): string {
-  return new Date(value).toLocaleTimeString('en-US', { hour: 'numeric', minute: '2-digit', timeZone: zone })
-}
-
 /** "in 3 h", "5 h ago", measured from `now` (the server's clock). */
 export function relativeHours(iso: string, now: string): string {
   const hours = Math.round((Date.parse(iso) - Date.parse(now)) / 3_600_000)

@@ -1,5 +1,6 @@
 import { ensureSessionPassword, lockDataDir, resolveDataDir } from '../utils/dataDir'
 import { closeDatabase, startDatabase } from '../utils/database'
+import { serverSettings } from '../utils/settings'
 import { seedDemoIfEmpty, seedReference } from '../database/seed'
 import { DEMO_PASSWORD, demoSignIns } from '../database/seed/demo'
 
@@ -10,7 +11,7 @@ import { DEMO_PASSWORD, demoSignIns } from '../database/seed/demo'
  */
 export default defineNitroPlugin((nitroApp) => {
   const dataDir = resolveDataDir()
-  const databaseUrl = process.env.DATABASE_URL || undefined
+  const { databaseUrl, demo } = serverSettings()
   let release: (() => void) | undefined
   try {
     // PGlite is single-process; a real PostgreSQL server does its own locking.
@@ -26,7 +27,6 @@ export default defineNitroPlugin((nitroApp) => {
     process.exit(1)
   }
 
-  const demo = demoEnabled()
   startDatabase({ dataDir, databaseUrl }, async (db) => {
     await seedReference(db)
     if (demo && await seedDemoIfEmpty(db, hashPassword)) {
@@ -45,10 +45,3 @@ export default defineNitroPlugin((nitroApp) => {
     release?.()
   })
 })
-
-/** Demo data is on in development and when SHELFSTEAD_DEMO=1 (the start script sets it); off otherwise. */
-function demoEnabled(): boolean {
-  const flag = process.env.SHELFSTEAD_DEMO
-  if (flag !== undefined) return ['1', 'true', 'on', 'yes'].includes(flag.toLowerCase())
-  return import.meta.dev
-}

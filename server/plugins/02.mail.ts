@@ -1,5 +1,6 @@
 import { mailMode, parseMessage, startFakeSmtp, stopFakeSmtp } from '../utils/mail'
 import { useDB } from '../utils/database'
+import { serverSettings } from '../utils/settings'
 import { sendDueReminders } from '../utils/reminders'
 import { serverNow } from '../utils/clock'
 
@@ -26,7 +27,7 @@ export default defineNitroPlugin((nitroApp) => {
     console.info('[shelfstead] E-mail is off (no SMTP_URL or SMTP_HOST): reminders wait in the database until it is set up.')
   }
 
-  const interval = Math.max(200, Number(process.env.SHELFSTEAD_REMINDER_INTERVAL_MS || 60_000))
+  const interval = serverSettings().reminderIntervalMs
   let timer: ReturnType<typeof setInterval> | undefined
   const tick = () => useDB().then(db => sendDueReminders(db)).catch(error => console.error('[shelfstead] Reminder tick failed:', error))
   if (mode !== 'off') {

@@ -5,7 +5,7 @@
 import type { H3Event } from 'h3'
 import { and, eq } from 'drizzle-orm'
 import type { ZodType, ZodTypeDef } from 'zod'
-import { roleRank, type HouseholdRole } from '../../utils/schemas/household'
+import { roleRank, type HouseholdRole } from '~~/utils/schemas/household'
 
 /** 401 before anything of the request is read, so an anonymous caller learns nothing. */
 export async function requireSession(event: H3Event) {

@@ -1,6 +1,6 @@
 import { and, desc, eq, inArray, isNull } from 'drizzle-orm'
-import { jarsPerMonthByProduct, stockSeries, usedPerMonth } from '../../utils/after'
-import { openPlanStatuses } from '../../utils/vocabulary'
+import { jarsPerMonthByProduct, stockSeries, usedPerMonth } from '~~/utils/after'
+import { openPlanStatuses } from '~~/utils/vocabulary'
 import type { Database } from './database'
 import { loadsAwaitingCheck } from './logbook'
 import { sealRates } from './sealCheck'

@@ -1,6 +1,6 @@
-import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm'
-import type { Canner, Catalogue, HouseholdSettings, PriceItem, Recipe } from '../../utils/planning'
-import { FUTURE_GAUGE_TEST } from '../../utils/schemas/catalogue'
+import { asc, eq, inArray, isNull, or } from 'drizzle-orm'
+import type { Canner, Catalogue, HouseholdSettings, PriceItem, Recipe } from '~~/utils/planning'
+import { FUTURE_GAUGE_TEST } from '~~/utils/schemas/catalogue'
 import type { Database } from './database'
 
 /** Recipes a household may use: the shared library plus its own house recipes. */
@@ -62,14 +62,6 @@ export async function loadCanners(db: Database, householdId: string) {
   return db.select().from(tables.canners)
     .where(eq(tables.canners.householdId, householdId))
     .orderBy(asc(tables.canners.name))
-}
-
-/** A household's own canner, or a 404 that does not reveal other households' canners. */
-export async function requireCanner(db: Database, householdId: string, cannerId: string) {
-  const [row] = await db.select().from(tables.canners)
-    .where(and(eq(tables.canners.id, cannerId), eq(tables.canners.householdId, householdId)))
-  if (!row) notFound('No such canner in this household.')
-  return row
 }
 
 function toPriceItem(row: typeof tables.priceItems.$inferSelect): PriceItem | null {

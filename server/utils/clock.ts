@@ -4,29 +4,27 @@
  * only under `nuxt dev` or when SHELFSTEAD_TEST_CLOCK=1 is set explicitly; a production server
  * without that flag always uses the real time.
  */
-import { dateIn } from '../../utils/time'
+import { dateIn } from '~~/utils/time'
+import { serverSettings } from './settings'
 
 let offsetMs = 0
 let initialised = false
 
 export function clockAdjustable(): boolean {
-  return Boolean(import.meta.dev) || process.env.SHELFSTEAD_TEST_CLOCK === '1'
+  return serverSettings().clockAdjustable
 }
 
 function init() {
   if (initialised) return
   initialised = true
-  const given = process.env.SHELFSTEAD_NOW_OFFSET_MS
-  if (!given) return
+  const value = serverSettings().nowOffsetMs
+  if (value === undefined) return
   if (!clockAdjustable()) {
     console.warn('[shelfstead] SHELFSTEAD_NOW_OFFSET_MS is ignored: set SHELFSTEAD_TEST_CLOCK=1 to allow moving the clock.')
     return
   }
-  const value = Number(given)
-  if (Number.isFinite(value)) {
-    offsetMs = value
-    console.warn(`[shelfstead] The server clock runs ${Math.round(value / 60_000)} minutes ahead (SHELFSTEAD_NOW_OFFSET_MS).`)
-  }
+  offsetMs = value
+  console.warn(`[shelfstead] The server clock runs ${Math.round(value / 60_000)} minutes ahead (SHELFSTEAD_NOW_OFFSET_MS).`)
 }
 
 export function serverNow(): Date {

@@ -1,22 +1,22 @@
 import { chmodSync, existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs'
 import { randomBytes } from 'node:crypto'
-import { basename, dirname, isAbsolute, join, resolve } from 'node:path'
+import { basename, dirname, join, resolve } from 'node:path'
+import { serverSettings } from './settings'
 
 /**
  * The absolute data directory: NUXT_DATA_DIR when set, else `.data/` in the project.
  * A built server (`.output/server/index.mjs`) counts the folder holding `.output` as the project,
  * so `nuxt preview` and `node .output/server/index.mjs` share the data of `nuxt dev`.
  */
-export function resolveDataDir(env: NodeJS.ProcessEnv = process.env): string {
-  const configured = env.NUXT_DATA_DIR
-  if (configured) return isAbsolute(configured) ? configured : resolve(configured)
+export function resolveDataDir(configured = serverSettings().dataDir): string {
+  if (configured) return configured
   const entry = process.argv[1] ? resolve(process.argv[1]) : ''
   const outputDir = dirname(dirname(entry))
   if (basename(outputDir) === '.output') return join(dirname(outputDir), '.data')
   return resolve('.data')
 }
 
-export class DataDirLockedError extends Error {}
+class DataDirLockedError extends Error {}
 
 function isAlive(pid: number): boolean {
   try {
@@ -71,6 +71,7 @@ export function lockDataDir(dataDir: string): () => void {
  * A self-hosted start without one gets a random secret kept in the data directory (owner-only),
  * so sessions survive restarts and no sign-in ever fails for want of a secret.
  */
+// The one write to the environment: nuxt-auth-utils reads its secret from NUXT_SESSION_PASSWORD.
 export function ensureSessionPassword(dataDir: string, env: NodeJS.ProcessEnv = process.env): 'env' | 'file' | 'generated' {
   const given = env.NUXT_SESSION_PASSWORD
   if (given) {

@@ -1,6 +1,7 @@
 import { existsSync } from 'node:fs'
 import { dirname, join, resolve } from 'node:path'
 import { PGlite } from '@electric-sql/pglite'
+import { serverSettings } from './settings'
 import { drizzle as drizzlePglite, type PgliteDatabase } from 'drizzle-orm/pglite'
 import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator'
 import { drizzle as drizzlePg } from 'drizzle-orm/node-postgres'
@@ -15,6 +16,10 @@ export const tables = schema
  * (node-postgres differs only in its raw query-result type, which we never use).
  */
 export type Database = PgliteDatabase<typeof schema>
+/** A transaction handed to `db.transaction(tx => …)`. */
+export type Tx = Parameters<Parameters<Database['transaction']>[0]>[0]
+/** Either: reads that run inside or outside a transaction. */
+export type Db = Database | Tx
 
 interface OpenDatabase {
   db: Database
@@ -27,7 +32,7 @@ let ready = false
 /** Where the drizzle-kit migrations are: copied next to the built server, or in the source tree. */
 export function migrationsFolder(): string {
   const candidates = [
-    process.env.SHELFSTEAD_MIGRATIONS_DIR,
+    serverSettings().migrationsDir,
     process.argv[1] ? join(dirname(resolve(process.argv[1])), 'migrations') : undefined,
     resolve('server/database/migrations'),
   ].filter((c): c is string => Boolean(c))

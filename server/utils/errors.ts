@@ -1,6 +1,6 @@
 import type { H3Event } from 'h3'
 import type { ZodType, ZodTypeDef } from 'zod'
-import type { ApiErrorData, ApiIssue } from '../../utils/schemas/errors'
+import type { ApiErrorData, ApiIssue } from '~~/utils/schemas/errors'
 
 /**
  * The one error envelope of the API. Every refusal a route or server util makes goes through
@@ -53,7 +53,7 @@ export function unavailable(message: string): never {
 }
 
 /** Parse `input` with a zod schema; the first problem answers 400 with its field and message. */
-export function parseOr400<T>(schema: ZodType<T, ZodTypeDef, unknown>, input: unknown): T {
+function parseOr400<T>(schema: ZodType<T, ZodTypeDef, unknown>, input: unknown): T {
   const result = schema.safeParse(input)
   if (result.success) return result.data
   const issues = result.error.issues.map(i => ({ field: i.path.join('.'), message: i.message }))

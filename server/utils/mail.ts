@@ -2,6 +2,7 @@ import type { AddressInfo } from 'node:net'
 import nodemailer, { type Transporter } from 'nodemailer'
 import { SMTPServer } from 'smtp-server'
 import { simpleParser } from 'mailparser'
+import { serverSettings, type MailMode } from './settings'
 
 /**
  * Outgoing mail.
@@ -17,18 +18,9 @@ import { simpleParser } from 'mailparser'
  * given, `fake` in development and demo mode (SHELFSTEAD_DEMO=1, which `npm start` and the
  * tests set), `off` in production.
  */
-export type MailMode = 'smtp' | 'fake' | 'off'
-
-export function mailMode(env: NodeJS.ProcessEnv = process.env, dev = Boolean(import.meta.dev)): MailMode {
-  const flag = env.SHELFSTEAD_MAIL?.toLowerCase()
-  if (flag === 'smtp' || flag === 'fake' || flag === 'off') return flag
-  if (env.SMTP_URL || env.SMTP_HOST) return 'smtp'
-  const demo = env.SHELFSTEAD_DEMO
-  const demoOn = demo === undefined ? dev : ['1', 'true', 'on', 'yes'].includes(demo.toLowerCase())
-  return demoOn || dev ? 'fake' : 'off'
+export function mailMode(): MailMode {
+  return serverSettings().mail
 }
-
-export const mailFrom = () => process.env.MAIL_FROM || 'Shelfstead <shelfstead@localhost>'
 
 let fake: { server: SMTPServer, port: number } | undefined
 let fakeStarting: Promise<number> | undefined
@@ -58,7 +50,7 @@ export function startFakeSmtp(store: (message: { from: string, to: string[], raw
       },
     })
     server.on('error', error => console.error('[shelfstead] Mail fake:', error))
-    const wanted = Number(process.env.SHELFSTEAD_FAKE_SMTP_PORT || 0)
+    const wanted = serverSettings().fakeSmtpPort
     server.listen(wanted, '127.0.0.1', () => {
       const port = (server.server.address() as AddressInfo).port
       fake = { server, port }
@@ -93,14 +85,14 @@ async function getTransport(): Promise<Transporter> {
     transport = nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true })
     return transport
   }
-  const env = process.env
-  transport = env.SMTP_URL
-    ? nodemailer.createTransport(env.SMTP_URL)
+  const smtp = serverSettings().smtp
+  transport = smtp.url
+    ? nodemailer.createTransport(smtp.url)
     : nodemailer.createTransport({
-        host: env.SMTP_HOST,
-        port: Number(env.SMTP_PORT || 587),
-        secure: env.SMTP_SECURE === '1',
-        auth: env.SMTP_USER ? { user: env.SMTP_USER, pass: env.SMTP_PASS ?? '' } : undefined,
+        host: smtp.host,
+        port: smtp.port,
+        secure: smtp.secure,
+        auth: smtp.user ? { user: smtp.user, pass: smtp.pass } : undefined,
       })
   return transport
 }
@@ -114,13 +106,13 @@ export interface OutgoingMail {
 
 export async function sendMail(mail: OutgoingMail): Promise<{ messageId: string }> {
   const t = await getTransport()
-  const info = await t.sendMail({ from: mailFrom(), to: mail.to, subject: mail.subject, text: mail.text, html: mail.html })
+  const info = await t.sendMail({ from: serverSettings().mailFrom, to: mail.to, subject: mail.subject, text: mail.text, html: mail.html })
   return { messageId: String(info.messageId) }
 }
 
 /** Links in messages point here: SHELFSTEAD_PUBLIC_URL, else the local server. */
 export function publicUrl(): string {
-  return (process.env.SHELFSTEAD_PUBLIC_URL || `http://localhost:${process.env.PORT || 3000}`).replace(/\/$/, '')
+  return serverSettings().publicUrl
 }
 
 export function escapeHtml(s: string): string {

@@ -1,6 +1,6 @@
 import { and, asc, eq, gt, inArray, isNull, or } from 'drizzle-orm'
-import { planBatch, PlanningRefusal, type PlanLineRequest, type PlanResult } from '../../utils/planning'
-import type { PlanLineBody, PlanRequestBody } from '../../utils/schemas/plan'
+import { planBatch, PlanningRefusal, type PlanLineRequest, type PlanResult } from '~~/utils/planning'
+import type { PlanLineBody, PlanRequestBody } from '~~/utils/schemas/plan'
 import { loadCanners, loadCatalogue, loadHouseholdSettings, toPlanningCanner } from './catalogue'
 import type { Database } from './database'
 

@@ -1,6 +1,6 @@
 import { and, eq, inArray, isNull, lte, sql } from 'drizzle-orm'
-import { loadCode, sealWindow } from '../../utils/after'
-import { formatDateTimeLong } from '../../utils/time'
+import { loadCode, sealWindow } from '~~/utils/after'
+import { formatDateTimeLong } from '~~/utils/time'
 import type { Database } from './database'
 
 /** Who hears about a seal check: the household's canners and owners. */
@@ -11,7 +11,7 @@ async function recipientsOf(db: Database, householdId: string): Promise<string[]
   return [...new Set(rows.map(r => r.email))]
 }
 
-export async function sealReminderMessage(db: Database, loadId: string) {
+async function sealReminderMessage(db: Database, loadId: string) {
   const [load] = await db.select().from(tables.canningLoads).where(eq(tables.canningLoads.id, loadId))
   if (!load?.endedAt) return null
   const lines = await db.select({ jars: tables.loadLines.jars, product: tables.loadLines.product, jarName: tables.jarSizes.name })

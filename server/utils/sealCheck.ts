@@ -1,9 +1,10 @@
 import { and, asc, eq, isNotNull, isNull } from 'drizzle-orm'
-import { dateIn, formatDateTime } from '../../utils/time'
-import { REPROCESS_WITHIN_HOURS, bestByDate, loadCode, sealRate, sealRatesBy, sealWindow } from '../../utils/after'
-import type { SealCheckInput } from '../../utils/schemas/logbook'
+import { dateIn, formatDateTime } from '~~/utils/time'
+import { REPROCESS_WITHIN_HOURS, bestByDate, loadCode, sealRate, sealRatesBy, sealWindow } from '~~/utils/after'
+import type { SealCheckInput } from '~~/utils/schemas/logbook'
 import type { Database } from './database'
-import { loadDetail, nextLoadNumber, requireLoad } from './logbook'
+import { loadDetail, requireLoad } from './logbook'
+import { nextLoadNumber } from './logLoad'
 
 /**
  * Record a load's seal check: 12 h or more after it came out (USDA CG "Cooling jars": cool

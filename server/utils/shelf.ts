@@ -2,13 +2,11 @@ import { randomUUID } from 'node:crypto'
 import { and, desc, eq, gt, inArray, isNull, sql } from 'drizzle-orm'
 import { parse } from 'csv-parse/sync'
 import { stringify } from 'csv-stringify/sync'
-import { bestByDate, bestByStatus, fifo } from '../../utils/after'
-import { ShelfCsvRowSchema, shelfCsvColumns, type TakeOffInput } from '../../utils/schemas/shelf'
-import type { Database } from './database'
+import { bestByDate, bestByStatus, fifo } from '~~/utils/after'
+import { ShelfCsvRowSchema, shelfCsvColumns, type TakeOffInput } from '~~/utils/schemas/shelf'
+import type { Database, Tx } from './database'
 import { visibleRecipes } from './catalogue'
 import { fridgeList } from './sealCheck'
-
-type Tx = Parameters<Parameters<Database['transaction']>[0]>[0]
 
 /** The Shelf: lots with jars left, oldest first, each with its best-by status; the refrigerator list; the last undoable take-off. */
 export async function listShelf(db: Database, householdId: string, zone?: string) {

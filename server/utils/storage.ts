@@ -3,6 +3,7 @@ import { createStorage, type Storage } from 'unstorage'
 import fsDriver from 'unstorage/drivers/fs'
 import s3Driver from 'unstorage/drivers/s3'
 import { resolveDataDir } from './dataDir'
+import { serverSettings } from './settings'
 
 /**
  * Where photos are kept. SHELFSTEAD_STORAGE=s3 uses an S3-compatible bucket (S3_ENDPOINT,
@@ -11,25 +12,17 @@ import { resolveDataDir } from './dataDir'
  */
 let storage: Storage | undefined
 
-export function storageKind(env: NodeJS.ProcessEnv = process.env): 'fs' | 's3' {
-  return env.SHELFSTEAD_STORAGE?.toLowerCase() === 's3' ? 's3' : 'fs'
-}
-
 export function usePhotoStorage(): Storage {
   if (storage) return storage
-  const env = process.env
-  if (storageKind(env) === 's3') {
-    const missing = ['S3_ENDPOINT', 'S3_BUCKET', 'S3_ACCESS_KEY_ID', 'S3_SECRET_ACCESS_KEY'].filter(k => !env[k])
-    if (missing.length) throw new Error(`SHELFSTEAD_STORAGE=s3 needs ${missing.join(', ')}.`)
-    storage = createStorage({
-      driver: s3Driver({
-        endpoint: env.S3_ENDPOINT!,
-        bucket: env.S3_BUCKET!,
-        region: env.S3_REGION || 'us-east-1',
-        accessKeyId: env.S3_ACCESS_KEY_ID!,
-        secretAccessKey: env.S3_SECRET_ACCESS_KEY!,
-      }),
-    })
+  const { storage: kind, s3 } = serverSettings()
+  if (kind === 's3') {
+    const { endpoint, bucket, region, accessKeyId, secretAccessKey } = s3
+    if (!endpoint || !bucket || !accessKeyId || !secretAccessKey) {
+      const missing = Object.entries({ S3_ENDPOINT: endpoint, S3_BUCKET: bucket, S3_ACCESS_KEY_ID: accessKeyId, S3_SECRET_ACCESS_KEY: secretAccessKey })
+        .filter(([, value]) => !value).map(([name]) => name)
+      throw new Error(`SHELFSTEAD_STORAGE=s3 needs ${missing.join(', ')}.`)
+    }
+    storage = createStorage({ driver: s3Driver({ endpoint, bucket, region, accessKeyId, secretAccessKey }) })
   }
   else {
     storage = createStorage({ driver: fsDriver({ base: join(resolveDataDir(), 'photos') }) })
@@ -37,9 +30,9 @@ export function usePhotoStorage(): Storage {
   return storage
 }
 
-export { MAX_PHOTO_BYTES } from '../../utils/defaults'
+export { MAX_PHOTO_BYTES } from '~~/utils/defaults'
 
-export type { ImageType } from '../../utils/vocabulary'
+export type { ImageType } from '~~/utils/vocabulary'
 
 /** The image type from the file's first bytes (its "magic number"), never from its name or the browser's claim. */
 export function detectImageType(bytes: Uint8Array): ImageType | null {

@@ -1,5 +1,5 @@
 import { bench, describe } from 'vitest'
-import { layoutLayer } from '../../utils/planning'
+import { layoutLayer } from '~~/utils/planning'
 
 // Time to lay out one layer for 1…40 jars: a canner just big enough for n jars of 76.2 mm.
 const jar = 76.2

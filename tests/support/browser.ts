@@ -2,7 +2,7 @@ import { mkdirSync } from 'node:fs'
 import { join } from 'node:path'
 import { chromium, type Browser, type Locator, type Page } from 'playwright-core'
 
-export const artifactsDir = join('test-results', 'screenshots')
+const artifactsDir = join('test-results', 'screenshots')
 
 /** Debian's Chromium, quiet on a closed network. */
 export async function launchBrowser(): Promise<Browser> {

@@ -5,7 +5,7 @@ import { join } from 'node:path'
 import { freePort } from './server'
 
 /** Debian's PostgreSQL server binaries (package postgresql), newest version first. */
-export function postgresBin(): string {
+function postgresBin(): string {
   const root = '/usr/lib/postgresql'
   const versions = existsSync(root) ? readdirSync(root).sort((a, b) => Number(b) - Number(a)) : []
   const bin = versions.map(v => join(root, v, 'bin')).find(b => existsSync(join(b, 'initdb')))

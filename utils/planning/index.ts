@@ -8,18 +8,13 @@
 export * from './types'
 export { PlanningRefusal, type PlanWarning, type WarningLevel } from './errors'
 export * from './units'
-export { fillCapMl, gramsForMl, mlForGrams, volumeToHeadspaceMl, perJarFill, type PerJarFill } from './fill'
+export { fillCapMl, gramsForMl, mlForGrams, perJarFill, type PerJarFill } from './fill'
 export * from './scaling'
 export * from './process'
 export {
   PACKOMANIA_RATIOS,
-  MAX_TABLE_N,
   MAX_JARS_PER_LAYER,
-  DEFAULT_CLEARANCE_MM,
-  packomaniaRatio,
-  layerRatio,
   tableJarsPerLayer,
-  drawnPackings,
   drawnRatio,
   jarPositions,
   layoutLayer,
@@ -27,16 +22,12 @@ export {
   layoutTimings,
   type LayerLayout,
 } from './packing'
-export { searchPacking, type Point, type UnitPacking, type SearchOptions } from './packing-search'
+export { type Point, type UnitPacking, type SearchOptions } from './packing-search'
 export { buildLoads, spreadEvenly, type CannerFit, type Load, type LoadContent, type LoadLine } from './loads'
 export {
   DEFAULT_STEP_MINUTES,
-  DEFAULT_COOL_DOWN,
-  STEP_LABELS,
   buildSchedule,
   coolDownMinutes,
-  loadMinutes,
-  loadSteps,
   parseStart,
   type DayStart,
   type Schedule,
@@ -55,4 +46,4 @@ export {
 } from './shopping'
 export { costSummary, type CostInput, type CostSummary } from './cost'
 export * from './results'
-export { planBatch, DEFAULT_VINEGAR_ML_PER_JAR } from './plan'
+export { planBatch } from './plan'

@@ -188,7 +188,7 @@ function shrink(start: Point[], budget: number): UnitPacking {
  * inside it. These are the known constructions (single ring, ring with centre, 1-6-12 and
  * similar); the shrink step then improves them.
  */
-export function ringStarts(n: number): Point[][] {
+function ringStarts(n: number): Point[][] {
   const starts: Point[][] = []
   for (const centre of n === 1 ? [1] : [0, 1]) {
     const rest = n - centre

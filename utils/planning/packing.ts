@@ -31,7 +31,7 @@ export const PACKOMANIA_RATIOS: readonly number[] = [
   5.439718959, 5.545204223, 5.651661092, 5.752824331,
 ]
 
-export const MAX_TABLE_N = PACKOMANIA_RATIOS.length
+const MAX_TABLE_N = PACKOMANIA_RATIOS.length
 export const MAX_JARS_PER_LAYER = PACKING_DATA.length
 
 /**
@@ -46,12 +46,12 @@ const TABLE_EPSILON = 1e-12
 const DRAW_EPSILON = 1e-9
 
 /** R/r from the Packomania table, or undefined beyond n = 25. */
-export function packomaniaRatio(n: number): number | undefined {
+function packomaniaRatio(n: number): number | undefined {
   return PACKOMANIA_RATIOS[n - 1]
 }
 
 /** D / (d + c): how many clearance-widened jar radii fit in the canner's radius. */
-export function layerRatio(cannerDiameterMm: number, jarDiameterMm: number, clearanceMm: number): number {
+function layerRatio(cannerDiameterMm: number, jarDiameterMm: number, clearanceMm: number): number {
   return cannerDiameterMm / (jarDiameterMm + clearanceMm)
 }
 
@@ -70,7 +70,7 @@ export function tableJarsPerLayer(
 let drawn: UnitPacking[] | undefined
 
 /** Our arrangements for n = 1…40 (unit jar radius), measured exactly once and then reused. */
-export function drawnPackings(): readonly UnitPacking[] {
+function drawnPackings(): readonly UnitPacking[] {
   drawn ??= PACKING_DATA.map((flat) => {
     const points: Point[] = []
     for (let i = 0; i + 1 < flat.length; i += 2) points.push({ x: flat[i]!, y: flat[i + 1]! })

@@ -21,7 +21,7 @@ import { validateHousehold, validateOptions, validateRequest } from './validate'
 import { standingWarnings } from './warnings'
 
 /** Rim-wiping vinegar per jar: a splash on a clean cloth (our estimate; no published figure). */
-export const DEFAULT_VINEGAR_ML_PER_JAR = 5
+const DEFAULT_VINEGAR_ML_PER_JAR = 5
 
 /** Water for the canner's depth over its floor, its inside taken as a cylinder (mL). */
 const cannerWaterMl = (c: Canner): number => (Math.PI * (c.innerDiameterMm / 2) ** 2 * c.waterDepthMm) / 1000

@@ -1,6 +1,7 @@
 /**
  * Process time by jar size, pressure by gauge type and altitude, and the dial-gauge test check.
  */
+import { differenceInCalendarDays, parseISO } from 'date-fns'
 import { PlanningRefusal, caution, info, type PlanWarning } from './errors'
 import type { Canner, GaugeType, JarSize, Recipe } from './types'
 
@@ -102,16 +103,10 @@ export function seaLevelPsi(recipe: Recipe, gaugeType: GaugeType): number | unde
   return bands.sort((a, b) => a.minFt - b.minFt)[0]?.psi
 }
 
-const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})/
-
-/** Days from date `a` to date `b` (ISO date strings), or null if either is unreadable. */
+/** Whole calendar days from date `a` to date `b` (ISO date strings), or null if either is unreadable. */
 function daysBetween(a: string, b: string): number | null {
-  const ma = ISO_DATE.exec(a)
-  const mb = ISO_DATE.exec(b)
-  if (!ma || !mb) return null
-  const ta = Date.UTC(Number(ma[1]), Number(ma[2]) - 1, Number(ma[3]))
-  const tb = Date.UTC(Number(mb[1]), Number(mb[2]) - 1, Number(mb[3]))
-  return Number.isFinite(ta) && Number.isFinite(tb) ? Math.round((tb - ta) / 86_400_000) : null
+  const days = differenceInCalendarDays(parseISO(b.slice(0, 10)), parseISO(a.slice(0, 10)))
+  return Number.isNaN(days) ? null : days
 }
 
 /**

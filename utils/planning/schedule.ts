@@ -29,7 +29,7 @@ export const DEFAULT_COOL_DOWN = { pint: 30, quart: 45 } as const
 
 export type StepName = 'heat' | 'vent' | 'pressurise' | 'process' | 'cool' | 'wait' | 'unload'
 
-export const STEP_LABELS: Readonly<Record<StepName, string>> = {
+const STEP_LABELS: Readonly<Record<StepName, string>> = {
   heat: 'Heat the canner to venting',
   vent: 'Vent steam',
   pressurise: 'Bring up to pressure',
@@ -45,7 +45,7 @@ export function coolDownMinutes(jarCapacityMl: number, cool: { pint: number, qua
 }
 
 /** The steps of one load with their minutes, in order. */
-export function loadSteps(
+function loadSteps(
   processMinutes: number,
   coolMinutes: number,
   steps: StepMinutes,
@@ -90,7 +90,7 @@ export function parseStart(startAt: string | undefined, today: string, field = '
 }
 
 /** ISO text for `minutes` after the start, with the start's offset. */
-export function timeAfter(start: DayStart, minutes: number): string {
+function timeAfter(start: DayStart, minutes: number): string {
   return new Date(start.wallMs + minutes * 60_000).toISOString().slice(0, 19) + start.offset
 }
 

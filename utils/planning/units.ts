@@ -15,8 +15,6 @@ export const ML_PER_TBSP = convert(1).from('Tbs').to('ml')
 export const ML_PER_TSP = convert(1).from('tsp').to('ml')
 export const ML_PER_QUART = convert(1).from('qt').to('ml')
 export const GRAMS_PER_LB = convert(1).from('lb').to('g')
-export const GRAMS_PER_OZ = convert(1).from('oz').to('g')
-export const MM_PER_INCH = convert(1).from('in').to('mm')
 
 /**
  * Table salt, grams per US teaspoon: 6.0 g (USDA SR Legacy "Salt, table", NDB 02047).
@@ -26,8 +24,6 @@ export const SALT_GRAMS_PER_TSP = 6
 
 /** Conversions at the edges, all through convert-units. */
 export const mlToCups = (ml: number): number => convert(ml).from('ml').to('cup')
-export const cupsToMl = (cups: number): number => convert(cups).from('cup').to('ml')
-export const tspToMl = (tsp: number): number => convert(tsp).from('tsp').to('ml')
 export const gramsToLb = (g: number): number => convert(g).from('g').to('lb')
 export const lbToGrams = (lb: number): number => convert(lb).from('lb').to('g')
 export const mmToInches = (mm: number): number => convert(mm).from('mm').to('in')

@@ -13,7 +13,7 @@ const oneOf = <T extends string>(value: T, allowed: readonly T[], field: string,
 }
 
 /** Canner dimensions: positive and under 1 m; 1–10 layers; a known gauge type. */
-export function validateCanner(c: Canner, field: string): void {
+function validateCanner(c: Canner, field: string): void {
   num(c.innerDiameterMm, `${field}.innerDiameterMm`, `The inner diameter of ${c.name}`, { min: 0, above: true, max: 1000 })
   num(c.usableHeightMm, `${field}.usableHeightMm`, `The usable height of ${c.name}`, { min: 0, above: true, max: 1500 })
   num(c.rackThicknessMm, `${field}.rackThicknessMm`, `The rack thickness of ${c.name}`, { max: 100 })

@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm'
-import { LoginSchema } from '../../../utils/schemas/auth'
+import { LoginSchema } from '~~/utils/schemas/auth'
 
 /** One vague 401 for an unknown e-mail or a wrong password, so sign-in reveals no accounts. */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm'
-import { RegisterSchema } from '../../../utils/schemas/auth'
+import { RegisterSchema } from '~~/utils/schemas/auth'
 
 /** Create an account and its household; the new user is the household's owner and is signed in. */
 export default defineEventHandler(async (event) => {

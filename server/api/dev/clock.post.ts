@@ -1,4 +1,4 @@
-import { z } from '../../../utils/schemas/z'
+import { z } from '~~/utils/schemas/z'
 
 const BodySchema = z.object({
   offsetMs: z.number({ invalid_type_error: 'Give the offset in whole milliseconds.' }).int().min(0, 'The clock only moves forward.').max(400 * 86_400_000),

@@ -1,4 +1,4 @@
-import { HouseholdQuerySchema, RecipeParamsSchema } from '../../../utils/schemas/catalogue'
+import { HouseholdQuerySchema, RecipeParamsSchema } from '~~/utils/schemas/catalogue'
 
 /**
  * One recipe the household may see, with its ingredient's cup weight and expansion ratio and

@@ -1,5 +1,5 @@
 import { and, eq, isNull } from 'drizzle-orm'
-import { RecipeParamsSchema, SharedRecipePatchSchema } from '../../../utils/schemas/catalogue'
+import { RecipeParamsSchema, SharedRecipePatchSchema } from '~~/utils/schemas/catalogue'
 
 /**
  * A site admin corrects a shared recipe's words and source. Process times and pressures are

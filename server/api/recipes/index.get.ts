@@ -1,4 +1,4 @@
-import { HouseholdQuerySchema } from '../../../utils/schemas/catalogue'
+import { HouseholdQuerySchema } from '~~/utils/schemas/catalogue'
 
 /** The Recipe book: shared recipes (tested ones first) and the household's house recipes. */
 export default defineEventHandler(async (event) => {

@@ -5,14 +5,12 @@
  * Dates are relative to the moment of seeding. Only on an empty database, in demo mode.
  */
 import { and, eq, inArray } from 'drizzle-orm'
-import { bestByDate, loadCode, requiredProcess, sealWindow } from '../../../utils/after'
-import { dateIn } from '../../../utils/time'
-import type { JarSize, Recipe } from '../../../utils/planning/types'
-import type { Database } from '../../utils/database'
+import { bestByDate, loadCode, requiredProcess, sealWindow } from '~~/utils/after'
+import { dateIn } from '~~/utils/time'
+import type { JarSize, Recipe } from '~~/utils/planning/types'
+import type { Database, Tx } from '~~/server/utils/database'
 import * as t from '../schema'
 import { DEMO_TIME_ZONE } from './demo'
-
-type Tx = Parameters<Parameters<Database['transaction']>[0]>[0]
 
 const HOUR = 3_600_000
 const DAY = 24 * HOUR

@@ -2,7 +2,7 @@
  * The demo household: an invented homestead of our own (people, town, prices are made up).
  * Created only on an empty database and only in demo mode.
  */
-import type { Database } from '../../utils/database'
+import type { Database } from '~~/server/utils/database'
 import * as t from '../schema'
 
 export const DEMO_PASSWORD = 'put-up-2026'

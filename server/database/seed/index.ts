@@ -1,12 +1,10 @@
 import { and, count, eq, getTableColumns, inArray, isNotNull, sql } from 'drizzle-orm'
 import type { PgTable } from 'drizzle-orm/pg-core'
-import type { Database } from '../../utils/database'
+import type { Database, Tx } from '~~/server/utils/database'
 import * as t from '../schema'
 import { ingredientSeed, jarSizeSeed, recipePressureBandSeed, recipeSeed, REFERENCE_VERSION } from './reference'
 import { seedDemoHousehold } from './demo'
 import { seedDemoSeason } from './demo-season'
-
-type Tx = Parameters<Parameters<Database['transaction']>[0]>[0]
 
 /** `set` for an upsert: every column the seed rows give, except the key, takes the incoming value. */
 function incoming(table: PgTable, rows: ReadonlyArray<Record<string, unknown>>, key: string) {

@@ -4,7 +4,7 @@
  * Sources: ../shared/reference/canning-reference.md (USDA Complete Guide to Home Canning,
  * AIB 539, rev. 2015 — "CG"; MSU Extension "Preserving Food Safely" reprints; USDA SR Legacy).
  */
-import type { GaugeType } from '../../../utils/vocabulary'
+import type { GaugeType } from '~~/utils/vocabulary'
 import type { recipeJarSpecs, recipes } from '../schema'
 
 /**
@@ -218,4 +218,3 @@ export const recipeSeed: RecipeSeed[] = [
 export const recipePressureBandSeed = recipeSeed.flatMap(r =>
   pressureBands.map(b => ({ recipeId: r.id, ...b })),
 )
-export const publishedPressureBands = pressureBands

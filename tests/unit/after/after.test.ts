@@ -2,9 +2,9 @@ import { describe, expect, it } from 'vitest'
 import {
   addMonths, bestByDate, bestByStatus, fifo, jarsPerMonthByProduct, lastMonths, loadCode, loadShortfall,
   monthKey, requiredProcess, sealRate, sealWindow, stockSeries, usedPerMonth,
-} from '../../../utils/after'
-import type { JarSize, Recipe } from '../../../utils/planning/types'
-import { fromLocalInput } from '../../../utils/time'
+} from '~~/utils/after'
+import type { JarSize, Recipe } from '~~/utils/planning/types'
+import { fromLocalInput } from '~~/utils/time'
 
 const H = 3_600_000
 /** Months are the household's: counted in its own time zone, never the test machine's. */

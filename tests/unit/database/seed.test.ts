@@ -3,10 +3,10 @@ import { and, count, eq } from 'drizzle-orm'
 import { drizzle } from 'drizzle-orm/pglite'
 import { migrate } from 'drizzle-orm/pglite/migrator'
 import { beforeAll, describe, expect, it } from 'vitest'
-import * as schema from '../../../server/database/schema'
-import { seedDemoIfEmpty, seedReference } from '../../../server/database/seed'
-import { recipeSeed, REFERENCE_VERSION } from '../../../server/database/seed/reference'
-import type { Database } from '../../../server/utils/database'
+import * as schema from '~~/server/database/schema'
+import { seedDemoIfEmpty, seedReference } from '~~/server/database/seed'
+import { recipeSeed, REFERENCE_VERSION } from '~~/server/database/seed/reference'
+import type { Database } from '~~/server/utils/database'
 
 let db: Database
 

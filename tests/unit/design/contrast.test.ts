@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import tailwindConfig, { palette as configPalette } from '../../../tailwind.config'
-import { contrastRatio, hex, pairings, palette, relativeLuminance } from '../../../assets/css/palette'
+import tailwindConfig, { palette as configPalette } from '~~/tailwind.config'
+import { contrastRatio, hex, pairings, palette, relativeLuminance } from '~~/assets/css/palette'
 
 // Contrast ratios use WCAG 2.1 §1.4.3, relative luminance definition:
 // L = 0.2126 R + 0.7152 G + 0.0722 B on linearised sRGB, ratio = (L1 + 0.05) / (L2 + 0.05).

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { buildShopping, costSummary } from '../../../utils/planning'
+import { buildShopping, costSummary } from '~~/utils/planning'
 import { blackBeans, household, ingredients, jarSizes, pint } from './fixtures'
 
 const LB = 453.59237

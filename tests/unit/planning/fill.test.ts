@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { PlanningRefusal, fillCapMl, kitchenMeasure, mlToCups, perJarFill } from '../../../utils/planning'
+import { PlanningRefusal, fillCapMl, kitchenMeasure, mlToCups, perJarFill } from '~~/utils/planning'
 import { blackBeans, dryPack, halfPint, jarSizes, pint, quart, usdaDryBeans } from './fixtures'
 
 const HALF_CUP_ML = 236.5882365 / 2 // NIST

@@ -3,7 +3,7 @@
  * figures from memory (no agency publishes them — canning reference §5.2), so tests built on
  * them assert only what holds across the typical range.
  */
-import type { Canner, Catalogue, HouseholdSettings, Ingredient, JarSize, PressureBand, Recipe } from '../../../utils/planning'
+import type { Canner, Catalogue, HouseholdSettings, Ingredient, JarSize, PressureBand, Recipe } from '~~/utils/planning'
 
 // Nominal capacities: exact US customary volumes (NIST; canning reference §5.1).
 // Diameters and heights: typical, from memory (reference §5.2 ranges), not published.

@@ -1,4 +1,4 @@
-import type { Point } from '../../../utils/planning'
+import type { Point } from '~~/utils/planning'
 
 /**
  * What is wrong with a drawn layer: a jar (widened by the clearance) poking through the wall or

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { buildLoads, spreadEvenly, type CannerFit, type LoadLine } from '../../../utils/planning'
+import { buildLoads, spreadEvenly, type CannerFit, type LoadLine } from '~~/utils/planning'
 
 const line = (lineIndex: number, jars: number, processMinutes: number, over: Partial<LoadLine> = {}): LoadLine => ({
   lineIndex, recipeId: `r${lineIndex}`, jarSizeId: 'pint', jars, processMinutes, psiByCanner: { a: 10, b: 10 }, ...over,

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest'
 import {
   MAX_JARS_PER_LAYER, PACKOMANIA_RATIOS, drawnRatio, jarPositions, layersFor, layoutLayer, layoutTimings, tableJarsPerLayer,
   type Point,
-} from '../../../utils/planning'
+} from '~~/utils/planning'
 import { layoutViolations } from './geometry'
 
 // R/r for n = 1…20, E. Specht, Packomania "circles in a circle" (canning reference §6 table),

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { PlanningRefusal, planBatch, type PlanLineRequest, type PlanRequest } from '../../../utils/planning'
+import { PlanningRefusal, planBatch, type PlanLineRequest, type PlanRequest } from '~~/utils/planning'
 import {
   TODAY, catalogue, dialCanner, dryPack, halfGallon, halfPint, household, pint, productRecipe, publishedProducts,
   quart, standardCanner, usdaDryBeans,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { PlanningRefusal, bandAltitude, gaugeTestWarning, pressureFor, processMinutesFor } from '../../../utils/planning'
+import { PlanningRefusal, bandAltitude, gaugeTestWarning, pressureFor, processMinutesFor } from '~~/utils/planning'
 import {
   dialCanner, halfGallon, halfPint, jarSizes, pint, pintAndAHalf, productRecipe, publishedProducts, quart, usdaDryBeans,
 } from './fixtures'

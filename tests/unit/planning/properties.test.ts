@@ -3,7 +3,7 @@ import { describe, expect } from 'vitest'
 import {
   DEFAULT_STEP_MINUTES, PlanningRefusal, buildLoads, buildSchedule, goodsForJars, jarsFromGoods, layersFor, layoutLayer,
   parseStart, perJarFill, planBatch, type Canner, type LoadLine, type PlanLineRequest, type PlanRequest,
-} from '../../../utils/planning'
+} from '~~/utils/planning'
 import { TODAY, blackBeans, catalogue, dryPack, household, jarSizes, pint, standardCanner } from './fixtures'
 import { layoutViolations } from './geometry'
 

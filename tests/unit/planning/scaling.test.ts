@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { PlanningRefusal, jarsForAmount, jarsFromConsumption, jarsFromGoods, type LineAmount } from '../../../utils/planning'
+import { PlanningRefusal, jarsForAmount, jarsFromConsumption, jarsFromGoods, type LineAmount } from '~~/utils/planning'
 
 const LB = 453.59237 // NIST
 

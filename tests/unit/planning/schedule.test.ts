@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { DEFAULT_STEP_MINUTES, PlanningRefusal, buildSchedule, coolDownMinutes, parseStart } from '../../../utils/planning'
+import { DEFAULT_STEP_MINUTES, PlanningRefusal, buildSchedule, coolDownMinutes, parseStart } from '~~/utils/planning'
 
 // Step lengths (CG "Using pressure canners" via MSU-PFS 01600948, EDIS HE8302; reference §2):
 // heat to vent 12–15 min (we use 15), vent 10, pressurise 3–5 (5), natural cool-down about 30 min

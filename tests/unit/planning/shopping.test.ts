@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { buildShopping, cheapestCombination } from '../../../utils/planning'
+import { buildShopping, cheapestCombination } from '~~/utils/planning'
 import { blackBeans, household, ingredients, jarSizes, pint, quart } from './fixtures'
 
 const LB = 453.59237

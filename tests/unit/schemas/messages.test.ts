@@ -5,15 +5,15 @@
  */
 import { describe, expect, it } from 'vitest'
 import { z as bareZod, defaultErrorMap, ZodEffects, ZodObject, ZodType } from 'zod'
-import * as auth from '../../../utils/schemas/auth'
-import * as catalogue from '../../../utils/schemas/catalogue'
-import * as household from '../../../utils/schemas/household'
-import * as logbook from '../../../utils/schemas/logbook'
-import * as market from '../../../utils/schemas/market'
-import * as params from '../../../utils/schemas/params'
-import * as plan from '../../../utils/schemas/plan'
-import * as shelf from '../../../utils/schemas/shelf'
-import { houseErrorMap } from '../../../utils/schemas/z'
+import * as auth from '~~/utils/schemas/auth'
+import * as catalogue from '~~/utils/schemas/catalogue'
+import * as household from '~~/utils/schemas/household'
+import * as logbook from '~~/utils/schemas/logbook'
+import * as market from '~~/utils/schemas/market'
+import * as params from '~~/utils/schemas/params'
+import * as plan from '~~/utils/schemas/plan'
+import * as shelf from '~~/utils/schemas/shelf'
+import { houseErrorMap } from '~~/utils/schemas/z'
 
 /** zod's default wording (zod 3 locales/en) and a leading "field:" path. */
 const ZOD_DEFAULT = /^(Required|Expected |Invalid|String must|Number must|Array must|Too small|Too big|Unrecognized key|Should be|Date must|BigInt must)/

@@ -1,4 +1,4 @@
-import { HouseholdParamsSchema } from '../../../../utils/schemas/household'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
 
 /** The Pantry board, including jarsUsedPerMonth by product for the Batch planner (any member). */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
 import { eq } from 'drizzle-orm'
-import { HouseholdParamsSchema, HouseholdSettingsSchema } from '../../../../utils/schemas/household'
+import { HouseholdParamsSchema, HouseholdSettingsSchema } from '~~/utils/schemas/household'
 
 export default defineEventHandler(async (event) => {
   const { params: { id }, db } = await requireHouseholdRole(event, HouseholdParamsSchema, 'owner')

@@ -1,5 +1,5 @@
 import { and, eq } from 'drizzle-orm'
-import { CannerParamsSchema } from '../../../../../utils/schemas/catalogue'
+import { CannerParamsSchema } from '~~/utils/schemas/catalogue'
 
 export default defineEventHandler(async (event) => {
   const { params: { id, cannerId }, db } = await requireHouseholdRole(event, CannerParamsSchema, 'owner')

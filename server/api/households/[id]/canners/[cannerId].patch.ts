@@ -1,5 +1,5 @@
 import { and, eq } from 'drizzle-orm'
-import { CannerParamsSchema, CannerSchema, withGaugeStatus } from '../../../../../utils/schemas/catalogue'
+import { CannerParamsSchema, CannerSchema, withGaugeStatus } from '~~/utils/schemas/catalogue'
 
 /** Change some of a canner's measurements; another household's canner is a 404. */
 export default defineEventHandler(async (event) => {

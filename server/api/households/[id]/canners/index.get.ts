@@ -1,5 +1,5 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
-import { withGaugeStatus } from '../../../../../utils/schemas/catalogue'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
+import { withGaugeStatus } from '~~/utils/schemas/catalogue'
 
 /** The household's canners, each saying whether its dial gauge is due for an accuracy test. */
 export default defineEventHandler(async (event) => {

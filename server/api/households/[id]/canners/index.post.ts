@@ -1,5 +1,5 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
-import { CannerSchema, withGaugeStatus } from '../../../../../utils/schemas/catalogue'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
+import { CannerSchema, withGaugeStatus } from '~~/utils/schemas/catalogue'
 
 export default defineEventHandler(async (event) => {
   const { params: { id }, db } = await requireHouseholdRole(event, HouseholdParamsSchema, 'owner')

@@ -1,5 +1,5 @@
 import { asc, eq } from 'drizzle-orm'
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
 
 /** Empty jars the household owns, one row per jar size in the catalogue (0 when none). */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
-import { JarStockSchema, unknownReference } from '../../../../../utils/schemas/catalogue'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
+import { JarStockSchema, unknownReference } from '~~/utils/schemas/catalogue'
 
 /** Set how many empty jars of one size the household owns. */
 export default defineEventHandler(async (event) => {

@@ -1,7 +1,7 @@
 import { stringify } from 'csv-stringify/sync'
-import { loadCode } from '../../../../../utils/after'
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
-import { LoadListQuerySchema } from '../../../../../utils/schemas/logbook'
+import { loadCode } from '~~/utils/after'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
+import { LoadListQuerySchema } from '~~/utils/schemas/logbook'
 
 /** The Logbook as CSV, one row per load line, with the same filters as the list (any member). */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
-import { LoadListQuerySchema } from '../../../../../utils/schemas/logbook'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
+import { LoadListQuerySchema } from '~~/utils/schemas/logbook'
 
 /** One page of the Logbook: ?page=&pageSize=&sort=-startedAt&recipeId=&cannerId=&from=&to= (any member). */
 export default defineEventHandler(async (event) => {

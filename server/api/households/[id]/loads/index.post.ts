@@ -1,5 +1,5 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
-import { LoadCreateSchema } from '../../../../../utils/schemas/logbook'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
+import { LoadCreateSchema } from '~~/utils/schemas/logbook'
 
 /** Log a load as it was run, free-standing or from a saved plan's load (canner and up). */
 export default defineEventHandler(async (event) => {

@@ -1,4 +1,4 @@
-import { HouseholdPhotoParamsSchema } from '../../../../../utils/schemas/logbook'
+import { HouseholdPhotoParamsSchema } from '~~/utils/schemas/logbook'
 
 export default defineEventHandler(async (event) => {
   const { params: { id, photoId }, db } = await requireHouseholdRole(event, HouseholdPhotoParamsSchema, 'canner')

@@ -1,4 +1,4 @@
-import { HouseholdPhotoParamsSchema } from '../../../../../utils/schemas/logbook'
+import { HouseholdPhotoParamsSchema } from '~~/utils/schemas/logbook'
 
 /** A load photo, for members of its household only; another household's photo is a 404. */
 export default defineEventHandler(async (event) => {

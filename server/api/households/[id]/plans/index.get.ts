@@ -1,5 +1,5 @@
 import { desc, eq } from 'drizzle-orm'
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
 
 export default defineEventHandler(async (event) => {
   const { params: { id }, db } = await requireHouseholdRole(event, HouseholdParamsSchema, 'helper')

@@ -1,5 +1,5 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
-import { PlanSaveSchema } from '../../../../../utils/schemas/plan'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
+import { PlanSaveSchema } from '~~/utils/schemas/plan'
 
 /** Save a plan (canner and up). A plan the model refuses is not saved: 422 with the reason. */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
-import { PlanRequestSchema } from '../../../../../utils/schemas/plan'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
+import { PlanRequestSchema } from '~~/utils/schemas/plan'
 
 /** Compute a plan without saving it. Any member may preview; a refusal answers 422. */
 export default defineEventHandler(async (event) => {

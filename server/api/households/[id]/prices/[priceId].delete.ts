@@ -1,5 +1,5 @@
 import { and, eq } from 'drizzle-orm'
-import { PriceParamsSchema } from '../../../../../utils/schemas/catalogue'
+import { PriceParamsSchema } from '~~/utils/schemas/catalogue'
 
 export default defineEventHandler(async (event) => {
   const { params: { id, priceId }, db } = await requireHouseholdRole(event, PriceParamsSchema, 'owner')

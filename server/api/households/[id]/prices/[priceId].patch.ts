@@ -1,5 +1,5 @@
 import { and, eq } from 'drizzle-orm'
-import { PriceItemSchema, PriceParamsSchema, priceColumns, unknownReference } from '../../../../../utils/schemas/catalogue'
+import { PriceItemSchema, PriceParamsSchema, priceColumns, unknownReference } from '~~/utils/schemas/catalogue'
 
 /** Replace a price-list item; the body is the whole item, as its kind decides which fields apply. */
 export default defineEventHandler(async (event) => {

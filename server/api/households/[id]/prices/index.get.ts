@@ -1,5 +1,5 @@
 import { asc, eq } from 'drizzle-orm'
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
 
 /** The household's price list: what it pays for each package it buys. */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
 import { and, eq } from 'drizzle-orm'
-import { HouseRecipeParamsSchema } from '../../../../../utils/schemas/catalogue'
+import { HouseRecipeParamsSchema } from '~~/utils/schemas/catalogue'
 
 /** Remove a house recipe of this household (its jar specs and bands go with it). */
 export default defineEventHandler(async (event) => {

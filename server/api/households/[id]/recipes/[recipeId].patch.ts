@@ -1,5 +1,5 @@
 import { eq } from 'drizzle-orm'
-import { HouseRecipeParamsSchema, HouseRecipeSchema, houseRecipeRow, houseRecipeTables } from '../../../../../utils/schemas/catalogue'
+import { HouseRecipeParamsSchema, HouseRecipeSchema, houseRecipeRow, houseRecipeTables } from '~~/utils/schemas/catalogue'
 
 /**
  * Replace a house recipe of this household. Its process table is copied again from the tested

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto'
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
-import { HouseRecipeSchema, houseRecipeRow, houseRecipeTables } from '../../../../../utils/schemas/catalogue'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
+import { HouseRecipeSchema, houseRecipeRow, houseRecipeTables } from '~~/utils/schemas/catalogue'
 
 /**
  * A canner adds a house recipe. Whatever the body says, it is stored as 'house', with the

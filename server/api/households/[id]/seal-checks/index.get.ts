@@ -1,4 +1,4 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
 
 /** Loads awaiting their seal check, pending reprocessing loads, seal rates and the refrigerator list (any member). */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
-import { SealCheckSchema } from '../../../../../utils/schemas/logbook'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
+import { SealCheckSchema } from '~~/utils/schemas/logbook'
 
 /** Record a load's seal check (helpers too): sealed jars to the Shelf, unsealed to the refrigerator or reprocessing. */
 export default defineEventHandler(async (event) => {

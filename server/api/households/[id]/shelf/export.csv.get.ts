@@ -1,4 +1,4 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
 
 /** The Shelf as CSV, in the columns the import reads (any member). */
 export default defineEventHandler(async (event) => {

@@ -1,4 +1,4 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
 
 /**
  * Import a Shelf inventory from CSV (canner and up): the body is the CSV text (text/csv) or

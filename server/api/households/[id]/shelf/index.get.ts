@@ -1,4 +1,4 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
 
 /** The Shelf, oldest first, with best-by warnings, the refrigerator list and the last take-off (any member). */
 export default defineEventHandler(async (event) => {

@@ -1,5 +1,5 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
-import { LabelQuerySchema } from '../../../../../utils/schemas/shelf'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
+import { LabelQuerySchema } from '~~/utils/schemas/shelf'
 
 /** The jar labels to print: ?lots=<id,id> (default the whole Shelf), one label per jar left (any member). */
 export default defineEventHandler(async (event) => {

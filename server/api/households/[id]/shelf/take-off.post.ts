@@ -1,5 +1,5 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
-import { TakeOffSchema } from '../../../../../utils/schemas/shelf'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
+import { TakeOffSchema } from '~~/utils/schemas/shelf'
 
 /** Take jars off the Shelf, one lot or many; the empty jars go back to jar stock (canner and up). */
 export default defineEventHandler(async (event) => {

@@ -1,4 +1,4 @@
-import { HouseholdParamsSchema } from '../../../../../utils/schemas/household'
+import { HouseholdParamsSchema } from '~~/utils/schemas/household'
 
 /** Undo the household's latest take-off (canner and up). */
 export default defineEventHandler(async (event) => {

@@ -1,4 +1,4 @@
-import { HouseholdLoadParamsSchema } from '../../../../../../utils/schemas/logbook'
+import { HouseholdLoadParamsSchema } from '~~/utils/schemas/logbook'
 
 /** One load with its lines, seal check, photos and reprocessing links (any member). */
 export default defineEventHandler(async (event) => {

@@ -1,4 +1,4 @@
-import { HouseholdLoadParamsSchema, LoadUpdateSchema } from '../../../../../../utils/schemas/logbook'
+import { HouseholdLoadParamsSchema, LoadUpdateSchema } from '~~/utils/schemas/logbook'
 
 /** Record how a pending reprocessing load was run, or change a load's notes (canner and up). */
 export default defineEventHandler(async (event) => {

@@ -1,4 +1,4 @@
-import { HouseholdLoadParamsSchema } from '../../../../../../utils/schemas/logbook'
+import { HouseholdLoadParamsSchema } from '~~/utils/schemas/logbook'
 
 /**
  * Attach a photo to a load (canner and up): multipart field "photo", JPEG, PNG or WebP by its

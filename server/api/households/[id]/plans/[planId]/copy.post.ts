@@ -1,4 +1,4 @@
-import { HouseholdPlanParamsSchema } from '../../../../../../utils/schemas/params'
+import { HouseholdPlanParamsSchema } from '~~/utils/schemas/params'
 
 export default defineEventHandler(async (event) => {
   const { params: { id, planId }, db, user } = await requireHouseholdRole(event, HouseholdPlanParamsSchema, 'canner')

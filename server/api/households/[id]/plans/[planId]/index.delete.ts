@@ -1,5 +1,5 @@
 import { eq } from 'drizzle-orm'
-import { HouseholdPlanParamsSchema } from '../../../../../../utils/schemas/params'
+import { HouseholdPlanParamsSchema } from '~~/utils/schemas/params'
 
 export default defineEventHandler(async (event) => {
   const { params: { id, planId }, db } = await requireHouseholdRole(event, HouseholdPlanParamsSchema, 'canner')

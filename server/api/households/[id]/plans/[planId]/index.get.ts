@@ -1,4 +1,4 @@
-import { HouseholdPlanParamsSchema } from '../../../../../../utils/schemas/params'
+import { HouseholdPlanParamsSchema } from '~~/utils/schemas/params'
 
 /**
  * A saved plan, recomputed from current data (prices, canners, altitude may have changed).

@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm'
-import { HouseholdPlanParamsSchema } from '../../../../../../utils/schemas/params'
-import { PlanUpdateSchema } from '../../../../../../utils/schemas/plan'
+import { HouseholdPlanParamsSchema } from '~~/utils/schemas/params'
+import { PlanUpdateSchema } from '~~/utils/schemas/plan'
 
 /** Rename a plan, change its status, or replace its request (recomputed; a refusal saves nothing). */
 export default defineEventHandler(async (event) => {

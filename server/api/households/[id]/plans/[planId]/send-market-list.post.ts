@@ -1,5 +1,5 @@
-import { HouseholdPlanParamsSchema } from '../../../../../../utils/schemas/params'
-import { SendMarketListSchema } from '../../../../../../utils/schemas/logbook'
+import { HouseholdPlanParamsSchema } from '~~/utils/schemas/params'
+import { SendMarketListSchema } from '~~/utils/schemas/logbook'
 
 /** E-mail a plan's Market list to a member of the household (any member may send it). */
 export default defineEventHandler(async (event) => {

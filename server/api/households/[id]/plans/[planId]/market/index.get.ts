@@ -1,5 +1,5 @@
 import { and, eq } from 'drizzle-orm'
-import { HouseholdPlanParamsSchema } from '../../../../../../../utils/schemas/params'
+import { HouseholdPlanParamsSchema } from '~~/utils/schemas/params'
 
 /** Who checked off what on this plan's market list. */
 export default defineEventHandler(async (event) => {

@@ -1,6 +1,6 @@
 import { and, eq } from 'drizzle-orm'
-import { MarketCheckSchema } from '../../../../../../../utils/schemas/market'
-import { HouseholdPlanParamsSchema } from '../../../../../../../utils/schemas/params'
+import { MarketCheckSchema } from '~~/utils/schemas/market'
+import { HouseholdPlanParamsSchema } from '~~/utils/schemas/params'
 
 /** Check an item off (or back on) for every member. Any member may do it, helpers included. */
 export default defineEventHandler(async (event) => {

@@ -1,4 +1,4 @@
-import { FridgeParamsSchema } from '../../../../../../../utils/schemas/shelf'
+import { FridgeParamsSchema } from '~~/utils/schemas/shelf'
 
 /** The refrigerated jars were eaten (or thrown out): off the list, jars back to jar stock (canner and up). */
 export default defineEventHandler(async (event) => {

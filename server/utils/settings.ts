@@ -1,0 +1,85 @@
+/**
+ * Every environment variable the server reads, in one place (README.md lists them for people).
+ * Nothing else in server/ reads process.env: it asks `serverSettings()`. Functions that tests drive with
+ * a made-up environment take a `readSettings(env)` result instead.
+ *
+ * Nuxt's runtimeConfig is used only for what modules read themselves (nuxt-auth-utils' session).
+ */
+import { resolve } from 'node:path'
+
+const truthy = (value: string | undefined) => value !== undefined && ['1', 'true', 'on', 'yes'].includes(value.toLowerCase())
+
+/** A whole number from the environment, or the fallback when unset, empty or not a number. */
+function integer(value: string | undefined, fallback: number): number {
+  if (value === undefined || value.trim() === '') return fallback
+  const n = Number(value)
+  return Number.isInteger(n) ? n : fallback
+}
+
+export type MailMode = 'smtp' | 'fake' | 'off'
+
+export interface ServerSettings {
+  /** NUXT_DATA_DIR made absolute, or undefined for the default beside the project. */
+  dataDir: string | undefined
+  databaseUrl: string | undefined
+  migrationsDir: string | undefined
+  /** SHELFSTEAD_DEMO: on in development unless set, on with `npm start` and in tests. */
+  demo: boolean
+  mail: MailMode
+  mailFrom: string
+  smtp: { url?: string, host?: string, port: number, secure: boolean, user?: string, pass: string }
+  fakeSmtpPort: number
+  publicUrl: string
+  reminderIntervalMs: number
+  storage: 'fs' | 's3'
+  s3: { endpoint?: string, bucket?: string, region: string, accessKeyId?: string, secretAccessKey?: string }
+  /** SHELFSTEAD_TEST_CLOCK=1 (or `nuxt dev`) lets the clock be moved; the offset it starts with. */
+  clockAdjustable: boolean
+  nowOffsetMs: number | undefined
+}
+
+export function readSettings(env: NodeJS.ProcessEnv, dev = Boolean(import.meta.dev)): ServerSettings {
+  const demo = env.SHELFSTEAD_DEMO === undefined ? dev : truthy(env.SHELFSTEAD_DEMO)
+  const mailFlag = env.SHELFSTEAD_MAIL?.toLowerCase()
+  const mail: MailMode = mailFlag === 'smtp' || mailFlag === 'fake' || mailFlag === 'off'
+    ? mailFlag
+    : env.SMTP_URL || env.SMTP_HOST ? 'smtp' : demo || dev ? 'fake' : 'off'
+  const offset = env.SHELFSTEAD_NOW_OFFSET_MS
+  return {
+    dataDir: env.NUXT_DATA_DIR ? resolve(env.NUXT_DATA_DIR) : undefined,
+    databaseUrl: env.DATABASE_URL || undefined,
+    migrationsDir: env.SHELFSTEAD_MIGRATIONS_DIR || undefined,
+    demo,
+    mail,
+    mailFrom: env.MAIL_FROM || 'Shelfstead <shelfstead@localhost>',
+    smtp: {
+      url: env.SMTP_URL || undefined,
+      host: env.SMTP_HOST || undefined,
+      port: integer(env.SMTP_PORT, 587),
+      secure: env.SMTP_SECURE === '1',
+      user: env.SMTP_USER || undefined,
+      pass: env.SMTP_PASS ?? '',
+    },
+    fakeSmtpPort: integer(env.SHELFSTEAD_FAKE_SMTP_PORT, 0),
+    publicUrl: (env.SHELFSTEAD_PUBLIC_URL || `http://localhost:${env.PORT || 3000}`).replace(/\/$/, ''),
+    reminderIntervalMs: Math.max(200, integer(env.SHELFSTEAD_REMINDER_INTERVAL_MS, 60_000)),
+    storage: env.SHELFSTEAD_STORAGE?.toLowerCase() === 's3' ? 's3' : 'fs',
+    s3: {
+      endpoint: env.S3_ENDPOINT || undefined,
+      bucket: env.S3_BUCKET || undefined,
+      region: env.S3_REGION || 'us-east-1',
+      accessKeyId: env.S3_ACCESS_KEY_ID || undefined,
+      secretAccessKey: env.S3_SECRET_ACCESS_KEY || undefined,
+    },
+    clockAdjustable: dev || env.SHELFSTEAD_TEST_CLOCK === '1',
+    nowOffsetMs: offset === undefined || offset.trim() === '' || !Number.isFinite(Number(offset)) ? undefined : Number(offset),
+  }
+}
+
+let current: ServerSettings | undefined
+
+/** This process's settings, read once. */
+export function serverSettings(): ServerSettings {
+  current ??= readSettings(process.env)
+  return current
+}
