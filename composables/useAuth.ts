@@ -1,54 +1,68 @@
 import type { LoginInput, RegisterInput } from '~/utils/schemas/auth'
+import type { ApiAnswer } from '~/utils/api'
 import { dataKeys } from '~/utils/dataKeys'
 import type { HouseholdRole } from '~/utils/schemas/household'
 import { roleRank } from '~/utils/schemas/household'
 
-export interface MeResponse {
-  user: { id: string, email: string, name: string, isAdmin: boolean }
-  households: Array<{ id: string, name: string, role: HouseholdRole }>
-}
+export type MeResponse = ApiAnswer<'/api/auth/me'>
 
 /**
- * The signed-in person, their households and the active one. `can('canner')` mirrors the
- * server's role check so pages hide what the server would refuse anyway.
+ * The signed-in person, their households and the one this session works in (kept by the server
+ * per session, so every route acts on it). `can('canner')` mirrors the server's role check so
+ * pages hide what the server would refuse anyway.
  */
 export function useAuth() {
   const session = useUserSession()
-  const store = useHouseholdStore()
   const requestFetch = useRequestFetch()
   const { data: me, refresh } = useAsyncData<MeResponse | null>(
     dataKeys.me,
+    // A type argument: with this many routes Nitro's route matcher exceeds the type checker's depth.
     () => (session.loggedIn.value ? requestFetch<MeResponse>('/api/auth/me') : Promise.resolve(null)),
     { watch: [session.loggedIn] },
   )
 
   const households = computed(() => me.value?.households ?? [])
-  const active = computed(() =>
-    households.value.find(h => h.id === store.activeId) ?? households.value[0] ?? null,
-  )
-  const can = (minRole: HouseholdRole) =>
-    Boolean(me.value?.user.isAdmin) || (active.value ? roleRank[active.value.role] >= roleRank[minRole] : false)
+  const active = computed(() => households.value.find(h => h.id === me.value?.activeHouseholdId) ?? null)
+  const can = (minRole: HouseholdRole) => (active.value ? roleRank[active.value.role] >= roleRank[minRole] : false)
 
-  async function signedIn() {
+  /** After an answer that carries the session (sign-in, sign-up, an accepted invitation, a reset). */
+  async function signedIn(answer?: MeResponse) {
     await session.fetch()
-    await refresh()
+    if (answer) me.value = answer
+    else await refresh()
   }
 
   async function signIn(values: LoginInput) {
-    await $fetch('/api/auth/login', { method: 'POST', body: values })
-    await signedIn()
+    await signedIn(await $fetch<MeResponse>('/api/auth/login', { method: 'POST', body: values }))
   }
 
   async function register(values: RegisterInput) {
-    await $fetch('/api/auth/register', { method: 'POST', body: values })
-    await signedIn()
+    await signedIn(await $fetch<MeResponse>('/api/auth/register', { method: 'POST', body: values }))
   }
 
-  async function logout() {
-    await $fetch('/api/auth/logout', { method: 'POST' })
+  /** Work in another of the person's households: every screen reloads its data. */
+  async function select(householdId: string) {
+    if (householdId === me.value?.activeHouseholdId) return
+    me.value = await $fetch<MeResponse>('/api/auth/household', { method: 'POST', body: { householdId } })
+    await refreshNuxtData()
+  }
+
+  async function signedOut(stay = false) {
     await session.clear()
     me.value = null
-    await navigateTo('/login')
+    clearNuxtData()
+    if (!stay) await navigateTo('/login')
+  }
+
+  /** Sign out; `stay` keeps the page (an invitation for another address, opened while signed in). */
+  async function logout(options: { stay?: boolean } = {}) {
+    await $fetch('/api/auth/logout', { method: 'POST' })
+    await signedOut(options.stay)
+  }
+
+  async function logoutEverywhere() {
+    await $fetch('/api/auth/logout-everywhere', { method: 'POST' })
+    await signedOut()
   }
 
   return {
@@ -57,11 +71,13 @@ export function useAuth() {
     households,
     active,
     activeId: computed(() => active.value?.id ?? null),
-    select: store.select,
+    select,
     can,
     signIn,
+    signedIn,
     register,
     refresh,
     logout,
+    logoutEverywhere,
   }
 }

@@ -1,8 +1,11 @@
-const publicPages = new Set(['/login', '/register'])
+const publicPages = new Set(['/login', '/register', '/forgot'])
+/** Open with or without a session: the link in an e-mail decides what they show. */
+const linkPages = /^\/(invite|reset)\//
 
-/** Every screen but sign-in and create-account needs a session; the server checks roles itself. */
+/** Every screen but sign-in, create-account, forgotten password and e-mailed links needs a session; the server checks roles itself. */
 export default defineNuxtRouteMiddleware((to) => {
   const { loggedIn } = useUserSession()
+  if (linkPages.test(to.path)) return
   if (publicPages.has(to.path)) {
     if (loggedIn.value) return navigateTo('/')
     return

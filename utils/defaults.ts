@@ -34,3 +34,8 @@ export function firstJarFor(recipe: CatalogueRecipe | undefined, jarSizes: reado
 
 /** The largest photo a load takes, checked by the photo route and, to spare a slow upload, by the page. */
 export const MAX_PHOTO_BYTES = 8 * 1024 * 1024
+
+/** An invitation link stays good this long (then the owner resends it). */
+export const INVITATION_DAYS = 7
+/** A password-reset link stays good this long. */
+export const RESET_LINK_MINUTES = 60

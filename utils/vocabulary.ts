@@ -60,3 +60,10 @@ export const reminderKinds = ['seal-check'] as const
 
 export const imageTypes = ['image/jpeg', 'image/png', 'image/webp'] as const
 export type ImageType = (typeof imageTypes)[number]
+
+/** What the household's activity record notes. */
+export const activityKinds = [
+  'settings', 'member', 'invitation', 'canner', 'price', 'jar-stock', 'recipe',
+  'plan', 'market', 'load', 'seal-check', 'shelf', 'photo',
+] as const
+export type ActivityKind = (typeof activityKinds)[number]

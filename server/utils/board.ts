@@ -7,14 +7,15 @@ import { sealRates } from './sealCheck'
 import { listShelf } from './shelf'
 
 /**
- * Everything the Pantry board shows, in one answer: the Shelf by product, seal checks due,
+ * Everything the Pantry board shows, in one answer: the first steps of a new household, the Shelf by product, seal checks due,
  * plans in progress, jars near or past best-by, seal rates, stock over the last 12 months,
  * jars used per month, and the jars-per-month figure the Batch planner can use.
  */
 export async function pantryBoard(db: Database, householdId: string) {
   const now = serverNow()
-  const zone = await householdTimeZone(db, householdId)
-  const [shelf, checks, rates, plans, lots, moves] = await Promise.all([
+  const [household] = await db.select({ timeZone: tables.households.timeZone, altitudeFt: tables.households.altitudeFt }).from(tables.households).where(eq(tables.households.id, householdId))
+  const zone = household!.timeZone
+  const [shelf, checks, rates, plans, lots, moves, [canner]] = await Promise.all([
     listShelf(db, householdId, zone),
     loadsAwaitingCheck(db, householdId),
     sealRates(db, householdId),
@@ -30,10 +31,13 @@ export async function pantryBoard(db: Database, householdId: string) {
     })
       .from(tables.shelfMovements).innerJoin(tables.shelfLots, eq(tables.shelfLots.id, tables.shelfMovements.lotId))
       .where(and(eq(tables.shelfMovements.householdId, householdId), isNull(tables.shelfMovements.undoneAt))),
+    db.select({ id: tables.canners.id }).from(tables.canners).where(eq(tables.canners.householdId, householdId)).limit(1),
   ])
   const taken = moves.map(m => ({ at: m.movedAt, jars: m.jars, key: `${m.product}|${m.jarSizeId}`, product: m.product, recipeId: m.recipeId, jarSizeId: m.jarSizeId }))
   return {
     now,
+    /** What a new household must do before the planner can give a process: enter the altitude, add a canner. */
+    firstSteps: { altitudeSet: household!.altitudeFt !== null, hasCanner: Boolean(canner) },
     today: shelf.today,
     shelf: { totalJars: shelf.totalJars, byProduct: shelf.byProduct },
     sealChecksDue: checks.due,

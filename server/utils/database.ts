@@ -92,3 +92,9 @@ export function written<T>(rows: T[]): T {
   if (!row) throw new Error('The write returned no row')
   return row
 }
+
+/** A unique index said no (PostgreSQL 23505), through drizzle's wrapper or not. */
+export function isUniqueViolation(error: unknown): boolean {
+  const e = error as { code?: string, cause?: { code?: string } }
+  return (e.code ?? e.cause?.code) === '23505'
+}

@@ -40,6 +40,10 @@ export function conflict(message: string, field?: string): never {
 export function tooLarge(message: string, field?: string): never {
   return fail(413, message, field)
 }
+/** 429: too many attempts; the caller sets Retry-After and says when to try again. */
+export function rateLimited(message: string): never {
+  return fail(429, message)
+}
 /** 422: well-formed, but the published tables (or the household's data) give no basis for it. */
 export function refusal(message: string, field?: string): never {
   return fail(422, message, field)

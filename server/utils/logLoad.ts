@@ -3,7 +3,7 @@
  * that goes with it. Reads are in logbook.ts.
  */
 import { and, eq, sql } from 'drizzle-orm'
-import { PlanningRefusal, type JarSize, type Recipe } from '~~/utils/planning'
+import { NO_ALTITUDE, PlanningRefusal, type JarSize, type Recipe } from '~~/utils/planning'
 import { loadShortfall, requiredProcess, sealWindow, type RequiredProcess } from '~~/utils/after'
 import type { LoadCreateInput, LoadUpdateInput } from '~~/utils/schemas/logbook'
 import { loadCatalogue } from './catalogue'
@@ -64,7 +64,10 @@ export async function createLoad(db: Database, householdId: string, userId: stri
     if (result && !load) badInput('planLoad', `That plan has loads 1 to ${result.loads.length}.`)
     if (load) planned = { psi: load.pressurePsi, minutes: load.processMinutes }
   }
-  const { required: table, reason } = requiredFor(lines, catalogue.jarSizes, canner.gaugeType, household!.altitudeFt)
+  // The altitude is stored with the load; without one there is no published pressure to check it against.
+  const altitudeFt = household!.altitudeFt
+  if (altitudeFt === null) refusal(NO_ALTITUDE)
+  const { required: table, reason } = requiredFor(lines, catalogue.jarSizes, canner.gaugeType, altitudeFt)
   const required = table && planned
     ? { ...table, psi: Math.max(table.psi, planned.psi), minutes: Math.max(table.minutes, planned.minutes) }
     : table
@@ -82,7 +85,7 @@ export async function createLoad(db: Database, householdId: string, userId: stri
       cannerId: canner.id,
       cannerName: canner.name,
       gaugeType: canner.gaugeType,
-      altitudeFt: household!.altitudeFt,
+      altitudeFt,
       pressurePsi: body.pressurePsi,
       processMinutes: body.processMinutes,
       requiredPsi: required?.psi ?? null,

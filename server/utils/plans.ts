@@ -16,7 +16,7 @@ function amountOf(line: PlanLineBody): PlanLineRequest['amount'] {
  * becomes a 422 whose message says what to change; unknown recipes, jar sizes, ingredients or
  * canners (including another household's) are refused the same way, naming the field.
  */
-export async function computePlan(db: Database, householdId: string, body: PlanRequestBody): Promise<PlanResult & { household: { name: string, altitudeFt: number, unitSystem: 'us' | 'metric' } }> {
+export async function computePlan(db: Database, householdId: string, body: PlanRequestBody): Promise<PlanResult & { household: { name: string, altitudeFt: number | null, unitSystem: 'us' | 'metric' } }> {
   const [{ catalogue, recipes, ingredients }, household, cannerRows] = await Promise.all([
     loadCatalogue(db, householdId),
     loadHouseholdSettings(db, householdId),

@@ -1,13 +1,13 @@
-import { and, eq, inArray, isNull, lte, sql } from 'drizzle-orm'
+import { and, eq, isNull, lte, sql } from 'drizzle-orm'
 import { loadCode, sealWindow } from '~~/utils/after'
 import { formatDateTimeLong } from '~~/utils/time'
 import type { Database } from './database'
 
-/** Who hears about a seal check: the household's canners and owners. */
+/** Who hears about a seal check: every member, helpers included (anyone may record it). */
 async function recipientsOf(db: Database, householdId: string): Promise<string[]> {
   const rows = await db.select({ email: tables.users.email }).from(tables.memberships)
     .innerJoin(tables.users, eq(tables.users.id, tables.memberships.userId))
-    .where(and(eq(tables.memberships.householdId, householdId), inArray(tables.memberships.role, ['canner', 'owner'])))
+    .where(eq(tables.memberships.householdId, householdId))
   return [...new Set(rows.map(r => r.email))]
 }
 

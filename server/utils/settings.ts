@@ -33,6 +33,10 @@ export interface ServerSettings {
   reminderIntervalMs: number
   storage: 'fs' | 's3'
   s3: { endpoint?: string, bucket?: string, region: string, accessKeyId?: string, secretAccessKey?: string }
+  /** SHELFSTEAD_TRUST_PROXY=1: behind a reverse proxy, read the client address from X-Forwarded-For. */
+  trustProxy: boolean
+  /** SHELFSTEAD_ADMIN_EMAIL: the account with this address is made a site admin at start. */
+  adminEmail: string | undefined
   /** SHELFSTEAD_TEST_CLOCK=1 (or `nuxt dev`) lets the clock be moved; the offset it starts with. */
   clockAdjustable: boolean
   nowOffsetMs: number | undefined
@@ -71,6 +75,8 @@ export function readSettings(env: NodeJS.ProcessEnv, dev = Boolean(import.meta.d
       accessKeyId: env.S3_ACCESS_KEY_ID || undefined,
       secretAccessKey: env.S3_SECRET_ACCESS_KEY || undefined,
     },
+    trustProxy: truthy(env.SHELFSTEAD_TRUST_PROXY),
+    adminEmail: env.SHELFSTEAD_ADMIN_EMAIL?.trim().toLowerCase() || undefined,
     clockAdjustable: dev || env.SHELFSTEAD_TEST_CLOCK === '1',
     nowOffsetMs: offset === undefined || offset.trim() === '' || !Number.isFinite(Number(offset)) ? undefined : Number(offset),
   }

@@ -52,6 +52,8 @@ describe('seal-check reminders', () => {
     const reg = await first.client.post('/api/auth/register', { email: EMAIL, password: PASSWORD, name: 'Ansel Drummond', householdName: 'Drummond root cellar' })
     expect(reg.status).toBe(201)
     householdId = reg.body.households[0].id
+    // A new household has no altitude; at 600 ft a weighted gauge needs 10 psi (USDA CG Guide 4, Table 2).
+    expect((await first.client.patch(`/api/households/${householdId}`, { altitudeFt: 600 })).status).toBe(200)
     const canner = await first.client.post(`/api/households/${householdId}/canners`, { name: 'Old weighted canner', innerDiameterMm: 310, usableHeightMm: 330, rackThicknessMm: 6, gaugeType: 'weighted', maxLayers: 2, waterDepthMm: 76 })
     const now = Date.now()
     const load = await first.client.post(`/api/households/${householdId}/loads`, {

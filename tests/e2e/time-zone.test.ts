@@ -55,6 +55,8 @@ beforeAll(async () => {
   const reg = await client.post('/api/auth/register', { email: EMAIL, password: PASSWORD, name: 'Ilse Marchetti', householdName: 'Marchetti mesa kitchen', timeZone: ZONE })
   expect(reg.status).toBe(201)
   hid = reg.body.households[0].id
+  // A mesa kitchen at 6,000 ft: a weighted gauge needs 15 psi above 1,000 ft (USDA CG Guide 4, Table 2).
+  expect((await client.patch(`/api/households/${hid}`, { altitudeFt: 6000 })).status).toBe(200)
   const canner = await client.post(`/api/households/${hid}/canners`, { name: 'Weighted canner', innerDiameterMm: 310, usableHeightMm: 330, rackThicknessMm: 6, gaugeType: 'weighted', maxLayers: 2, waterDepthMm: 76 })
   expect(canner.status).toBe(201)
   cannerId = canner.body.id

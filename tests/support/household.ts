@@ -54,3 +54,33 @@ export async function newHousehold(server: RunningServer, who: { email: string, 
   expect((await owner.request('PUT', api('/jar-stock'), { jarSizeId: 'pint-regular', count: 30 })).status).toBe(200)
   return { owner, id, email: who.email, password: who.password, cannerId: canner.body.id, dialCannerId: dial.body.id, api }
 }
+
+/** The newest link to `path` (e.g. "/invite/") in mail to `email`, read from that person's own Outbox. */
+export async function linkInMail(client: ApiClient, email: string, path: string): Promise<string> {
+  const box = (await client.get('/api/dev/outbox')).body as Array<{ to: string[], text: string }>
+  expect(Array.isArray(box), JSON.stringify(box)).toBe(true)
+  const mail = box.find(m => m.to.includes(email) && m.text.includes(path))
+  expect(mail, `no mail with ${path} to ${email}`).toBeDefined()
+  const link = mail!.text.match(new RegExp(`https?://\\S+${path.replace(/\//g, '\\/')}[A-Za-z0-9_-]+`))
+  expect(link).not.toBeNull()
+  return link![0]
+}
+
+/**
+ * A person with an account (and a household) of their own, brought into `household` with `role`
+ * the way a person is: the owner invites them, they open the link from their mail and accept.
+ * Their session then works in `household`.
+ */
+export async function joinByInvitation(server: RunningServer, household: TestHousehold, who: { email: string, password: string, name: string }, role: 'helper' | 'canner' | 'owner') {
+  const person = new ApiClient(server.url)
+  const reg = await person.post('/api/auth/register', { ...who, householdName: `${who.name}'s kitchen` })
+  expect(reg.status).toBe(201)
+  const invited = await household.owner.post(household.api('/invitations'), { email: who.email, role })
+  expect(invited.status, JSON.stringify(invited.body)).toBe(201)
+  const link = await linkInMail(person, who.email, '/invite/')
+  const token = link.split('/invite/')[1]!
+  const accepted = await person.post(`/api/invitations/${token}/accept`, { mode: 'signed-in' })
+  expect(accepted.status, JSON.stringify(accepted.body)).toBe(200)
+  expect(accepted.body.activeHouseholdId).toBe(household.id)
+  return { client: person, userId: accepted.body.user.id as string, ownHouseholdId: reg.body.households[0].id as string }
+}

@@ -39,6 +39,8 @@ export async function startServer(options: { dataDir?: string, env?: Record<stri
       NITRO_HOST: '127.0.0.1',
       SHELFSTEAD_DEMO: '1',
       NUXT_SESSION_PASSWORD: '',
+      // links in mail point where the test's browser already is (cookies are per host)
+      SHELFSTEAD_PUBLIC_URL: `http://127.0.0.1:${port}`,
       ...options.env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
@@ -89,6 +91,9 @@ export class ApiClient {
     catch { /* not JSON */ }
     return { status: res.status, body: parsed }
   }
+
+  /** The session cookie, for requests made with fetch directly (uploads, CSV). */
+  get cookieHeader() { return this.cookie }
 
   get(path: string) { return this.request('GET', path) }
   post(path: string, body?: unknown) { return this.request('POST', path, body ?? {}) }

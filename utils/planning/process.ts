@@ -49,13 +49,18 @@ export function processMinutesFor(
 /** Altitudes below this are taken to be a typing slip (the lowest inhabited land is about −1,400 ft). */
 const LOWEST_ALTITUDE_FT = -1500
 
+/** A household that has not entered its altitude gets no pressure: the published bands depend on it. */
+export const NO_ALTITUDE = 'Your household has no altitude yet, and the canner pressure depends on it. '
+  + 'Enter it on the Household page (a map or your local extension office can tell you the altitude of your kitchen).'
+
 /**
  * The altitude used to look up a pressure band, in whole feet. A fractional altitude is rounded
  * UP (2,000.5 ft → 2,001 ft → the higher band), so rounding can only add pressure. Below sea level
  * the 0-ft band applies: the air pressure is higher there, so the sea-level setting gives at least
  * the published temperature.
  */
-export function bandAltitude(altitudeFt: number, field: string): { feet: number, warnings: PlanWarning[] } {
+export function bandAltitude(altitudeFt: number | null | undefined, field: string): { feet: number, warnings: PlanWarning[] } {
+  if (altitudeFt === null || altitudeFt === undefined) throw new PlanningRefusal(NO_ALTITUDE, field)
   if (typeof altitudeFt !== 'number' || !Number.isFinite(altitudeFt)) {
     throw new PlanningRefusal('Enter the altitude of your kitchen in feet.', field)
   }

@@ -117,7 +117,8 @@ export interface VinegarPrice {
 export type PriceItem = IngredientPrice | SaltPrice | LidPrice | JarPrice | VinegarPrice
 
 export interface HouseholdSettings {
-  altitudeFt: number
+  /** Null until the household enters it; the planner then refuses to give a pressure. */
+  altitudeFt: number | null
   unitSystem: UnitSystem
   /** Price of one store-bought can of the same product, compared one can per jar. */
   storeCanPriceCents: number
@@ -151,7 +152,8 @@ export interface PlanRequest {
   canners: Canner[]
   /** ISO date-time; its offset (Z, ±hh:mm or none for local wall-clock time) is kept. */
   startAt?: string
-  altitudeFt: number
+  /** Null when the household has not entered its altitude: refused (NO_ALTITUDE). */
+  altitudeFt: number | null
   /** The household's date today (server clock, household time zone): the gauge-test check and the default start. */
   today: string
 }

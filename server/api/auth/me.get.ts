@@ -1,4 +1,3 @@
 export default defineEventHandler(async (event) => {
-  const user = await requireSession(event)
-  return { user, households: await householdsOf(user.id) }
+  return sessionAnswer(await requireSession(event))
 })

@@ -1,14 +1,15 @@
-import { desc } from 'drizzle-orm'
+import { desc, sql } from 'drizzle-orm'
 
 /**
  * Messages the local fake SMTP server received, newest first. Development, demo and tests only:
- * a 404 unless the fake is running (SHELFSTEAD_MAIL=fake or its default). Needs a signed-in user.
+ * a 404 unless the fake is running. A person sees only mail addressed to them (invitation and
+ * reset links are in it); a site admin sees all of it.
  */
 export default defineEventHandler(async (event) => {
   if (!fakeMailRunning()) notFound('Not found.')
-  await requireSession(event)
+  const { user } = await requireSession(event)
   const db = await useDB()
-  return db.select({
+  const query = db.select({
     id: tables.mailOutbox.id,
     receivedAt: tables.mailOutbox.receivedAt,
     from: tables.mailOutbox.envelopeFrom,
@@ -17,5 +18,9 @@ export default defineEventHandler(async (event) => {
     text: tables.mailOutbox.text,
     html: tables.mailOutbox.html,
     raw: tables.mailOutbox.raw,
-  }).from(tables.mailOutbox).orderBy(desc(tables.mailOutbox.receivedAt)).limit(200)
+  }).from(tables.mailOutbox)
+  const mine = user.isAdmin
+    ? query
+    : query.where(sql`exists (select 1 from jsonb_array_elements_text(${tables.mailOutbox.envelopeTo}) as rcpt where lower(rcpt) = ${user.email.toLowerCase()})`)
+  return mine.orderBy(desc(tables.mailOutbox.receivedAt)).limit(200)
 })

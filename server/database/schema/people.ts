@@ -18,7 +18,8 @@ export const users = pgTable('users', {
 export const households = pgTable('households', {
   id: uuid('id').primaryKey().defaultRandom(),
   name: text('name').notNull(),
-  altitudeFt: integer('altitude_ft').notNull().default(0),
+  /** Null until someone enters it: the planner gives no pressure without it. */
+  altitudeFt: integer('altitude_ft'),
   unitSystem: text('unit_system', { enum: unitSystems }).notNull().default('us'),
   /** What the household pays for one store-bought can of cooked beans, in cents. */
   storeCanPriceCents: integer('store_can_price_cents').notNull().default(129),

@@ -75,17 +75,19 @@ export async function seedDemoSeason(db: Database, householdId: string, now = ne
     const lots: Array<{ id: string, jarsLeft: number, cannedOn: string }> = []
     let number = 0
 
+    const altitudeFt = household!.altitudeFt
+    if (altitudeFt === null) throw new Error('The demo household needs an altitude before its season is logged.')
     for (const demo of season) {
       const canner = cannerOf(demo.canner)
       const lines = demo.lines.map(l => ({ recipe: recipes.get(l.recipeId)!, jarSize: jarSizes.find(j => j.id === l.jarSizeId)! }))
-      const required = requiredProcess(lines, jarSizes, canner.gaugeType, household!.altitudeFt)
+      const required = requiredProcess(lines, jarSizes, canner.gaugeType, altitudeFt)
       const endedAt = new Date(now.getTime() - demo.daysAgo * DAY)
       const startedAt = new Date(endedAt.getTime() - (required.minutes + 90) * 60_000)
       number += 1
       const code = loadCode(number)
       const [load] = await tx.insert(t.canningLoads).values({
         householdId, number, status: 'done', cannerId: canner.id, cannerName: canner.name, gaugeType: canner.gaugeType,
-        altitudeFt: household!.altitudeFt, pressurePsi: required.psi, processMinutes: required.minutes,
+        altitudeFt: altitudeFt, pressurePsi: required.psi, processMinutes: required.minutes,
         requiredPsi: required.psi, requiredMinutes: required.minutes, requiredSource: required.source,
         startedAt, endedAt, shortfall: null, notes: demo.notes, createdBy: owner?.id ?? null, createdAt: startedAt, updatedAt: endedAt,
       }).returning()
@@ -117,7 +119,7 @@ export async function seedDemoSeason(db: Database, householdId: string, now = ne
           const againEnd = new Date(again.getTime() + (required.minutes + 80) * 60_000)
           const [re] = await tx.insert(t.canningLoads).values({
             householdId, number, status: 'done', reprocessOfId: load!.id, cannerId: canner.id, cannerName: canner.name, gaugeType: canner.gaugeType,
-            altitudeFt: household!.altitudeFt, pressurePsi: required.psi, processMinutes: required.minutes, requiredPsi: required.psi,
+            altitudeFt: altitudeFt, pressurePsi: required.psi, processMinutes: required.minutes, requiredPsi: required.psi,
             requiredMinutes: required.minutes, requiredSource: required.source, startedAt: again, endedAt: againEnd,
             deadlineAt: new Date(endedAt.getTime() + 24 * HOUR), notes: `Reprocessed ${l.unsealed} jars from load ${code} with new lids.`,
             createdBy: owner?.id ?? null, createdAt: checkedAt, updatedAt: againEnd,

@@ -3,7 +3,7 @@ import { CannerParamsSchema, CannerSchema, withGaugeStatus } from '~~/utils/sche
 
 /** Change some of a canner's measurements; another household's canner is a 404. */
 export default defineEventHandler(async (event) => {
-  const { params: { id, cannerId }, db } = await requireHouseholdRole(event, CannerParamsSchema, 'owner')
+  const { params: { id, cannerId }, db, user } = await requireHouseholdRole(event, CannerParamsSchema, 'owner')
   const body = await validBody(event, CannerSchema.partial())
   const today = await cannerToday(db, id, body.lastGaugeTestAt)
   const [canner] = await db.update(tables.canners)
@@ -11,5 +11,6 @@ export default defineEventHandler(async (event) => {
     .where(and(eq(tables.canners.id, cannerId), eq(tables.canners.householdId, id)))
     .returning()
   if (!canner) notFound('No such canner in this household.')
+  await recordActivity(db, { householdId: id, userId: user.id, kind: 'canner', summary: `Changed the canner ${canner.name}` })
   return withGaugeStatus(canner, today)
 })

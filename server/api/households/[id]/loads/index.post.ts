@@ -6,6 +6,7 @@ export default defineEventHandler(async (event) => {
   const { params: { id }, db, user } = await requireHouseholdRole(event, HouseholdParamsSchema, 'canner')
   const body = await validBody(event, LoadCreateSchema)
   const load = await createLoad(db, id, user.id, body)
+  await recordActivity(db, { householdId: id, userId: user.id, kind: 'load', summary: `Logged load ${load.code}`, detail: { loadId: load.id } })
   setResponseStatus(event, 201)
   return load
 })

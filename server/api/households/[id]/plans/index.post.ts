@@ -13,6 +13,7 @@ export default defineEventHandler(async (event) => {
     summary: planSummary(result),
     createdBy: user.id,
   }).returning())
+  await recordActivity(db, { householdId: id, userId: user.id, kind: 'plan', summary: `Saved the plan ${plan.name}`, detail: { planId: plan.id } })
   setResponseStatus(event, 201)
   return { plan, result }
 })

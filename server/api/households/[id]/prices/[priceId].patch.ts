@@ -3,7 +3,7 @@ import { PriceItemSchema, PriceParamsSchema, priceColumns, unknownReference } fr
 
 /** Replace a price-list item; the body is the whole item, as its kind decides which fields apply. */
 export default defineEventHandler(async (event) => {
-  const { params: { id, priceId }, db } = await requireHouseholdRole(event, PriceParamsSchema, 'owner')
+  const { params: { id, priceId }, db, user } = await requireHouseholdRole(event, PriceParamsSchema, 'owner')
   const body = await validBody(event, PriceItemSchema)
   const columns = priceColumns(body)
   const unknown = unknownReference(columns, await loadCatalogue(db, id))
@@ -13,5 +13,6 @@ export default defineEventHandler(async (event) => {
     .where(and(eq(tables.priceItems.id, priceId), eq(tables.priceItems.householdId, id)))
     .returning()
   if (!item) notFound('No such item in this household\'s price list.')
+  await recordActivity(db, { householdId: id, userId: user.id, kind: 'price', summary: `Changed a ${item.kind} price` })
   return item
 })

@@ -6,7 +6,7 @@ import { HouseRecipeParamsSchema, HouseRecipeSchema, houseRecipeRow, houseRecipe
  * recipe it names, so a change of basis takes that recipe's times and pressures.
  */
 export default defineEventHandler(async (event) => {
-  const { params: { id, recipeId }, db } = await requireHouseholdRole(event, HouseRecipeParamsSchema, 'canner')
+  const { params: { id, recipeId }, db, user } = await requireHouseholdRole(event, HouseRecipeParamsSchema, 'canner')
   const body = await validBody(event, HouseRecipeSchema)
   const catalogue = await loadCatalogue(db, id)
   if (!catalogue.recipes.some(r => r.id === recipeId && r.householdId === id)) {
@@ -25,5 +25,6 @@ export default defineEventHandler(async (event) => {
     await tx.insert(tables.recipeJarSpecs).values(built.specs.map(s => ({ recipeId, ...s })))
     await tx.insert(tables.recipePressureBands).values(built.bands.map(b => ({ recipeId, ...b })))
   })
+  await recordActivity(db, { householdId: id, userId: user.id, kind: 'recipe', summary: `Changed the house recipe ${body.name}` })
   return (await loadCatalogue(db, id)).recipes.find(r => r.id === recipeId)
 })

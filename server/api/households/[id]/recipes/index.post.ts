@@ -21,6 +21,7 @@ export default defineEventHandler(async (event) => {
     await tx.insert(tables.recipeJarSpecs).values(built.specs.map(s => ({ recipeId, ...s })))
     await tx.insert(tables.recipePressureBands).values(built.bands.map(b => ({ recipeId, ...b })))
   })
+  await recordActivity(db, { householdId: id, userId: user.id, kind: 'recipe', summary: `Added the house recipe ${body.name}` })
   setResponseStatus(event, 201)
   return (await loadCatalogue(db, id)).recipes.find(r => r.id === recipeId)
 })

@@ -5,7 +5,7 @@ import { HouseholdParamsSchema } from '~~/utils/schemas/household'
  * JSON { csv }. All rows or none: any bad row answers 400 with every problem by line number.
  */
 export default defineEventHandler(async (event) => {
-  const { params: { id }, db } = await requireHouseholdRole(event, HouseholdParamsSchema, 'canner')
+  const { params: { id }, db, user } = await requireHouseholdRole(event, HouseholdParamsSchema, 'canner')
   const type = getRequestHeader(event, 'content-type') ?? ''
   const text = type.includes('json') ? (await readBody<{ csv?: unknown }>(event))?.csv : await readRawBody(event, 'utf8')
   if (typeof text !== 'string' || !text.trim()) {
@@ -17,6 +17,7 @@ export default defineEventHandler(async (event) => {
     const first = result.issues[0]!
     badInput(first.field, `Nothing was imported. Line ${first.line}: ${first.message}`, result.issues)
   }
+  await recordActivity(db, { householdId: id, userId: user.id, kind: 'shelf', summary: 'Imported an inventory onto the Shelf' })
   setResponseStatus(event, 201)
   return result
 })

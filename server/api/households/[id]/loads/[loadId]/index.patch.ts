@@ -2,7 +2,9 @@ import { HouseholdLoadParamsSchema, LoadUpdateSchema } from '~~/utils/schemas/lo
 
 /** Record how a pending reprocessing load was run, or change a load's notes (canner and up). */
 export default defineEventHandler(async (event) => {
-  const { params: { id, loadId }, db } = await requireHouseholdRole(event, HouseholdLoadParamsSchema, 'canner')
+  const { params: { id, loadId }, db, user } = await requireHouseholdRole(event, HouseholdLoadParamsSchema, 'canner')
   const body = await validBody(event, LoadUpdateSchema)
-  return updateLoad(db, id, loadId, body)
+  const load = await updateLoad(db, id, loadId, body)
+  await recordActivity(db, { householdId: id, userId: user.id, kind: 'load', summary: `Recorded the run of load ${load.code}`, detail: { loadId } })
+  return load
 })

@@ -13,6 +13,7 @@ export default defineEventHandler(async (event) => {
   const file = parts?.find(p => p.name === 'photo' && p.filename !== undefined)
   if (!file) badInput('photo', 'Choose a photo to upload.')
   const photo = await savePhoto(db, { householdId: id, loadId, userId: user.id, bytes: file.data, name: file.filename ?? '' })
+  await recordActivity(db, { householdId: id, userId: user.id, kind: 'photo', summary: 'Added a photo to a load', detail: { loadId } })
   setResponseStatus(event, 201)
   return photo
 })

@@ -10,6 +10,7 @@ export default defineEventHandler(async (event) => {
     summary: source.summary,
     createdBy: user.id,
   }).returning())
+  await recordActivity(db, { householdId: id, userId: user.id, kind: 'plan', summary: `Copied the plan ${source.name}`, detail: { planId: plan.id } })
   setResponseStatus(event, 201)
   return { plan }
 })

@@ -4,7 +4,7 @@ import { PlanUpdateSchema } from '~~/utils/schemas/plan'
 
 /** Rename a plan, change its status, or replace its request (recomputed; a refusal saves nothing). */
 export default defineEventHandler(async (event) => {
-  const { params: { id, planId }, db } = await requireHouseholdRole(event, HouseholdPlanParamsSchema, 'canner')
+  const { params: { id, planId }, db, user } = await requireHouseholdRole(event, HouseholdPlanParamsSchema, 'canner')
   const body = await validBody(event, PlanUpdateSchema)
   const current = await requirePlan(db, id, planId)
   // Only a new request is recomputed (and refused with 422); renaming never depends on today's data.
@@ -18,5 +18,6 @@ export default defineEventHandler(async (event) => {
     })
     .where(eq(tables.plans.id, current.id))
     .returning()
+  await recordActivity(db, { householdId: id, userId: user.id, kind: 'plan', summary: body.request ? `Changed the plan ${plan!.name}` : body.status && body.status !== current.status ? `Marked the plan ${plan!.name} ${body.status}` : `Renamed the plan ${current.name} to ${plan!.name}`, detail: { planId } })
   return { plan, result }
 })
