@@ -156,7 +156,8 @@ describe('Recipe book and Household in Chromium', () => {
     await signIn(phone, server.url, 'owner@demo.shelfstead.test')
     await phone.goto(`${server.url}/household`, { waitUntil: 'networkidle' })
     const altitude = phone.getByLabel('Altitude')
-    expect(await altitude.inputValue()).toBe('2350')
+    // The test before switched the household to metric: 2,350 ft shows as 716 m (convert-units).
+    expect(await altitude.inputValue()).toBe('716')
     await altitude.fill('')
     await phone.getByRole('button', { name: 'Save settings' }).click()
     const settings = phone.getByRole('region', { name: 'Settings' })
@@ -165,6 +166,6 @@ describe('Recipe book and Household in Chromium', () => {
     expect(await settings.getByText('Saved.').count()).toBe(0)
     await screenshot(phone, 'household-4-altitude-refused')
     await phone.reload({ waitUntil: 'networkidle' })
-    expect(await phone.getByLabel('Altitude').inputValue()).toBe('2350')
+    expect(await phone.getByLabel('Altitude').inputValue()).toBe('716')
   })
 })
