@@ -26,18 +26,28 @@ export function useAuth() {
   const can = (minRole: HouseholdRole) => (active.value ? roleRank[active.value.role] >= roleRank[minRole] : false)
 
   /** After an answer that carries the session (sign-in, sign-up, an accepted invitation, a reset). */
-  async function signedIn(answer?: MeResponse) {
+  async function signedIn() {
     await session.fetch()
-    if (answer) me.value = answer
-    else await refresh()
+    await refresh()
+  }
+
+  /**
+   * Open the app at `path` with the new session: a fresh load, so no screen starts from state
+   * read before the person (or their household) changed. A client-side navigation here raced the
+   * refetch of `me` and now and then left the Pantry board waiting for a household id.
+   */
+  function enter(path: string) {
+    reloadNuxtApp({ path, persistState: false, force: true })
   }
 
   async function signIn(values: LoginInput) {
-    await signedIn(await $fetch<MeResponse>('/api/auth/login', { method: 'POST', body: values }))
+    await $fetch('/api/auth/login', { method: 'POST', body: values })
+    await signedIn()
   }
 
   async function register(values: RegisterInput) {
-    await signedIn(await $fetch<MeResponse>('/api/auth/register', { method: 'POST', body: values }))
+    await $fetch('/api/auth/register', { method: 'POST', body: values })
+    await signedIn()
   }
 
   /** Work in another of the person's households: every screen reloads its data. */
@@ -75,6 +85,7 @@ export function useAuth() {
     can,
     signIn,
     signedIn,
+    enter,
     register,
     refresh,
     logout,

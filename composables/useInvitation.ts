@@ -11,8 +11,8 @@ export function useInvitation(token: string) {
   const read = useFetch(`/api/invitations/${token}` as const, { key: dataKeys.invitation(token) })
 
   async function accept(body: AcceptInvitationInput) {
-    const answer = await $fetch<MeResponse>(`/api/invitations/${token}/accept`, { method: 'POST', body })
-    await auth.signedIn(answer)
+    await $fetch<MeResponse>(`/api/invitations/${token}/accept`, { method: 'POST', body })
+    await auth.signedIn()
     await refreshNuxtData()
   }
   return { ...read, accept }

@@ -15,7 +15,8 @@ export function usePasswordReset() {
 
   async function reset(token: string, password: string) {
     // Type argument: Nitro's route matcher exceeds the type checker's depth here.
-    await auth.signedIn(await $fetch<MeResponse>('/api/auth/reset', { method: 'POST', body: { token, password } }))
+    await $fetch<MeResponse>('/api/auth/reset', { method: 'POST', body: { token, password } })
+    await auth.signedIn()
   }
   return { request, linkStatus, reset }
 }

@@ -12,17 +12,12 @@ export default defineEventHandler((event) => {
   const site = getRequestHeader(event, 'sec-fetch-site')
   if (site && site !== 'same-origin' && site !== 'none') forbidden('Requests from other sites are refused.')
   const origin = getRequestHeader(event, 'origin')
-  if (origin && origin !== 'null') {
+  if (origin) {
     const { trustProxy, publicUrl } = serverSettings()
     const here = getRequestURL(event, { xForwardedHost: trustProxy, xForwardedProto: trustProxy }).origin
+    // An opaque origin ("null") matches neither.
     if (origin !== here && origin !== new URL(publicUrl).origin) forbidden('Requests from other sites are refused.')
   }
-  else if (origin === 'null') {
-    forbidden('Requests from other sites are refused.')
-  }
   const type = (getRequestHeader(event, 'content-type') ?? '').split(';')[0]!.trim().toLowerCase()
-  if (type && !BODY_TYPES.includes(type)) {
-    setResponseStatus(event, 415)
-    throw createError({ statusCode: 415, message: 'Send the form as JSON.', data: { field: 'body', issues: [{ field: 'body', message: 'Send the form as JSON.' }] } })
-  }
+  if (type && !BODY_TYPES.includes(type)) unsupportedBody('Send the form as JSON.')
 })

@@ -40,6 +40,10 @@ export function conflict(message: string, field?: string): never {
 export function tooLarge(message: string, field?: string): never {
   return fail(413, message, field)
 }
+/** 415: a body type this API does not take (form posts, text/plain). */
+export function unsupportedBody(message: string): never {
+  return fail(415, message, 'body')
+}
 /** 429: too many attempts; the caller sets Retry-After and says when to try again. */
 export function rateLimited(message: string): never {
   return fail(429, message)

@@ -13,6 +13,8 @@ const DEAD_INVITATION: Record<Exclude<InvitationStatus, 'open'>, string> = {
   revoked: 'This invitation was withdrawn by the household. Ask them if you should have another.',
 }
 
+const UNKNOWN_LINK = 'That invitation link is not one we sent, or it was replaced by a newer one. Ask the household to send it again.'
+
 async function byToken(db: Database | Tx, token: string) {
   const [row] = await db.select({ invitation: tables.invitations, household: tables.households.name, invitedBy: tables.users.name })
     .from(tables.invitations)
@@ -25,7 +27,7 @@ async function byToken(db: Database | Tx, token: string) {
 /** What an invitation link's page shows: whose household, which role, and whether it still works. */
 export async function describeInvitation(event: H3Event, db: Database, token: string) {
   const row = await byToken(db, token)
-  if (!row) notFound('That invitation link is not one we sent, or it was replaced by a newer one. Ask the household to send it again.')
+  if (!row) notFound(UNKNOWN_LINK)
   const status = invitationStatus(row.invitation)
   const current = await currentSession(event)
   const [account] = await db.select({ id: tables.users.id }).from(tables.users).where(sql`lower(${tables.users.email}) = ${row.invitation.email}`)
@@ -49,10 +51,10 @@ export async function describeInvitation(event: H3Event, db: Database, token: st
  */
 export async function acceptInvitation(event: H3Event, db: Database, token: string, body: AcceptInvitationInput) {
   const current = body.mode === 'signed-in' ? await requireSession(event) : null
-  const newHash = body.mode === 'register' ? await hashPassword(body.password) : null
-  if (body.mode === 'register') refuseCommonPassword('password', body.password)
   const found = await byToken(db, token)
-  if (!found) notFound('That invitation link is not one we sent, or it was replaced by a newer one. Ask the household to send it again.')
+  if (!found) notFound(UNKNOWN_LINK)
+  if (body.mode === 'register') refuseCommonPassword('password', body.password)
+  const newHash = body.mode === 'register' ? await hashPassword(body.password) : null
   const email = found.invitation.email.toLowerCase()
   if (body.mode === 'sign-in') {
     await spend(event, 'signInPerClient', clientAddress(event), 'sign-in attempts from this device')

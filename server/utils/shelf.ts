@@ -7,6 +7,7 @@ import { ShelfCsvRowSchema, shelfCsvColumns, type TakeOffInput } from '~~/utils/
 import type { Database, Tx } from './database'
 import { visibleRecipes } from './catalogue'
 import { fridgeList } from './sealCheck'
+import { recordActivity } from './activity'
 
 /** The Shelf: lots with jars left, oldest first, each with its best-by status; the refrigerator list; the last undoable take-off. */
 export async function listShelf(db: Database, householdId: string, zone?: string) {
@@ -81,12 +82,15 @@ export async function takeOff(db: Database, householdId: string, userId: string,
       })
       if (body.returnJars) await addJarStock(tx, householdId, lot.jarSizeId, item.jars)
     }
+    const jars = body.items.reduce((sum, item) => sum + item.jars, 0)
+    const products = [...new Set(body.items.map(item => lots.find(l => l.id === item.lotId)!.product))].join(', ')
+    await recordActivity(tx, { householdId, userId, kind: 'shelf', summary: `Took ${jars} jar${jars === 1 ? '' : 's'} off the Shelf (${products})`, detail: { batchId } })
   })
   return { batchId, ...(await listShelf(db, householdId)) }
 }
 
 /** Undo the household's latest take-off: jars back on their lots, returned empty jars out of jar stock. */
-export async function undoLastTakeOff(db: Database, householdId: string) {
+export async function undoLastTakeOff(db: Database, householdId: string, userId: string) {
   const now = serverNow()
   await db.transaction(async (tx) => {
     const last = await lastBatch(tx, householdId)
@@ -108,6 +112,7 @@ export async function undoLastTakeOff(db: Database, householdId: string) {
         }
       }
     }
+    await recordActivity(tx, { householdId, userId, kind: 'shelf', summary: 'Undid the last take-off from the Shelf', detail: { batchId: last.batchId } })
   })
   return listShelf(db, householdId)
 }
