@@ -88,7 +88,7 @@ export async function acceptInvitation(event: H3Event, db: Database, token: stri
     const householdId = invitation!.householdId
     await tx.insert(tables.memberships).values({ userId: user.id, householdId, role: invitation!.role }).onConflictDoNothing()
     await tx.update(tables.invitations).set({ acceptedAt: serverNow(), acceptedBy: user.id }).where(eq(tables.invitations.id, invitation!.id))
-    await recordActivity(tx, { householdId, userId: user.id, kind: 'member', summary: `${user.name} joined as ${invitation!.role}`, detail: { invitationId: invitation!.id } })
+    await recordActivity(tx, { householdId, userId: user.id, kind: 'member', summary: `Joined as ${invitation!.role}`, detail: { invitationId: invitation!.id } })
     return user
   })
 

@@ -71,7 +71,7 @@ export async function removeMember(db: Database, householdId: string, actorId: s
     await tx.delete(tables.memberships).where(and(eq(tables.memberships.householdId, householdId), eq(tables.memberships.userId, userId)))
     await tx.update(tables.sessions).set({ activeHouseholdId: null })
       .where(and(eq(tables.sessions.userId, userId), eq(tables.sessions.activeHouseholdId, householdId)))
-    await recordActivity(tx, { householdId, userId: actorId, kind: 'member', summary: actorId === userId ? `${member.name} left the household` : `Removed ${member.name} from the household`, detail: { userId } })
+    await recordActivity(tx, { householdId, userId: actorId, kind: 'member', summary: actorId === userId ? 'Left the household' : `Removed ${member.name} from the household`, detail: { userId } })
   })
 }
 

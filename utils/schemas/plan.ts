@@ -51,7 +51,7 @@ export const PlanRequestSchema = z.object({
   lines: z.array(PlanLineSchema).min(1, 'Add at least one recipe.').max(12, 'At most 12 lines in one plan.'),
 }).superRefine((body, ctx) => {
   if ((body.cannerId === undefined) === (body.cannerIds === undefined)) {
-    ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['cannerId'], message: 'Choose one canner (cannerId) or two side by side (cannerIds).' })
+    ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['cannerId'], message: 'Choose the canner, or two canners to run side by side.' })
   }
   if (body.cannerIds && new Set(body.cannerIds).size !== body.cannerIds.length) {
     ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['cannerIds'], message: 'Choose two different canners.' })

@@ -19,7 +19,7 @@ export default defineEventHandler(async (event) => {
     // No altitude yet: the planner asks for it before it gives any pressure.
     const [household] = await tx.insert(tables.households).values({ name: body.householdName, timeZone: body.timeZone ?? 'UTC' }).returning()
     await tx.insert(tables.memberships).values({ userId: user!.id, householdId: household!.id, role: 'owner' })
-    await recordActivity(tx, { householdId: household!.id, userId: user!.id, kind: 'member', summary: `${user!.name} created the household` })
+    await recordActivity(tx, { householdId: household!.id, userId: user!.id, kind: 'member', summary: 'Created the household' })
     return { user: user!, household: household! }
   }).catch((error: unknown) => {
     if (isUniqueViolation(error)) conflict('An account with that e-mail already exists. Sign in instead.', 'email')
