@@ -11,15 +11,16 @@ export const DEFAULT_BEST_BY_MONTHS = 12
 /** Jars on a line added to a plan. */
 export const ADDED_LINE_JARS = 9
 
-interface CatalogueRecipe { id: string, status: string, ingredientId: string | null, processMinutes: ReadonlyArray<{ jarKey: string }> }
+interface CatalogueRecipe { id: string, status: string, ingredientId: string | null, processMinutes: ReadonlyArray<{ jarKey: string }>, retired?: string | null }
 interface CatalogueJar { id: string, sizeKey: string, mouth: string }
 
 /**
- * The first line of a new plan: the first tested recipe of the Recipe book, in the first jar
+ * The first line of a new plan: the first tested recipe of the Recipe book still in the library, in the first jar
  * size of its process table (a regular-mouth jar where there is one), with its own bean.
  */
 export function starterLine(recipes: readonly CatalogueRecipe[], jarSizes: readonly CatalogueJar[]) {
-  const recipe = recipes.find(r => r.status === 'tested') ?? recipes[0]
+  const plannable = recipes.filter(r => !r.retired)
+  const recipe = plannable.find(r => r.status === 'tested') ?? plannable[0]
   const jar = firstJarFor(recipe, jarSizes)
   if (!recipe || !jar) return null
   return { recipeId: recipe.id, jarSizeId: jar.id, ...(recipe.ingredientId ? { ingredientId: recipe.ingredientId } : {}), jars: STARTER_JARS }

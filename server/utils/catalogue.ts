@@ -8,6 +8,17 @@ export function visibleRecipes(householdId: string) {
   return or(isNull(tables.recipes.householdId), eq(tables.recipes.householdId, householdId))
 }
 
+type RecipeRow = typeof tables.recipes.$inferSelect
+const day = (d: Date) => d.toISOString().slice(0, 10)
+const why = (reason: string | null) => (reason ?? 'no reason given').replace(/[\s.]+$/, '')
+
+/** Why a recipe may not be planned: it, or the tested recipe it borrows from, left the shared library. */
+function retiredSentence(row: RecipeRow, basis: RecipeRow | undefined): string | undefined {
+  if (row.retiredAt) return `${row.name} was retired from the shared library on ${day(row.retiredAt)}: ${why(row.retiredReason)}.`
+  if (basis?.retiredAt) return `${row.name} borrows its time and pressure from ${basis.name}, which was retired from the shared library on ${day(basis.retiredAt)}: ${why(basis.retiredReason)}.`
+  return undefined
+}
+
 /**
  * Read the reference data into the planning computation's shapes. Recipe rows keep their
  * descriptive fields (source, summary, caution …) beside the planning fields.
@@ -29,6 +40,7 @@ export async function loadCatalogue(db: Database, householdId: string) {
   const recipes = recipeRows.map(row => ({
     ...row,
     caution: row.caution ?? undefined,
+    retired: retiredSentence(row, recipeRows.find(b => b.id === row.basedOnRecipeId)),
     perJar: specs.filter(s => s.recipeId === row.id && (s.dryGrams !== null || s.saltTsp !== null))
       .map(s => ({ jarKey: s.sizeKey, dryGrams: s.dryGrams ?? undefined, saltTsp: s.saltTsp ?? undefined })),
     processMinutes: specs.filter(s => s.recipeId === row.id && s.processMinutes !== null)

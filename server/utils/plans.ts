@@ -101,12 +101,14 @@ export function planSummary(result: PlanResult) {
 
 /**
  * Published values corrected since a plan was last saved that touch its recipes (or every
- * recipe: a jar size, an ingredient), so the plan can say what changed when it is opened.
+ * recipe: a jar size, an ingredient), by a reference version or a site admin, so the plan can
+ * say what changed when it is opened.
  */
 export async function referenceChangesSince(db: Database, plan: { updatedAt: Date, request: PlanRequestBody }): Promise<string[]> {
   const recipeIds = plan.request.lines.map(l => l.recipeId)
-  const rows = await db.select({ what: tables.referenceChanges.what }).from(tables.referenceChanges)
+  const rows = await db.select({ what: tables.referenceChanges.what, reason: tables.referenceChanges.reason }).from(tables.referenceChanges)
     .where(and(gt(tables.referenceChanges.appliedAt, plan.updatedAt), or(isNull(tables.referenceChanges.recipeId), inArray(tables.referenceChanges.recipeId, recipeIds))))
     .orderBy(asc(tables.referenceChanges.appliedAt))
-  return rows.map(r => r.what)
+  // A site admin's change says why it was made.
+  return rows.map(r => (r.reason ? `${r.what} (${r.reason.replace(/[\s.]+$/, '')})` : r.what))
 }

@@ -13,6 +13,7 @@ import { join, relative } from 'node:path'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { ApiClient, startServer, type RunningServer } from '../support/server'
 import { ago, joinByInvitation, newHousehold, type TestHousehold } from '../support/household'
+import { libraryRecipe } from '../support/recipes'
 
 type Identity = 'anonymous' | 'helper' | 'canner' | 'owner' | 'stranger' | 'admin'
 const identities: Identity[] = ['anonymous', 'helper', 'canner', 'owner', 'stranger', 'admin']
@@ -55,6 +56,13 @@ async function freshLoad(): Promise<{ id: string, lines: Array<{ id: string }> }
   })
   expect(res.status, JSON.stringify(res.body)).toBe(201)
   return res.body
+}
+/** A shared recipe the site admin adds for the call (and retires, for a restore), so no other row depends on it. */
+async function freshLibraryRecipe(retired = false): Promise<string> {
+  const res = await clients.admin.post('/api/recipes', libraryRecipe())
+  expect(res.status, JSON.stringify(res.body)).toBe(201)
+  if (retired) expect((await clients.admin.post(`/api/recipes/${res.body.id}/retire`, { reason: 'Set up for the matrix.' })).status).toBe(200)
+  return res.body.id
 }
 async function freshFridgeItem(): Promise<string> {
   const load = await freshLoad()
@@ -125,7 +133,10 @@ const expectations: Record<string, Expectation> = {
   'GET /api/jar-sizes': { access: 'session', call: () => ({ path: '/api/jar-sizes' }) },
   'GET /api/recipes': { access: 'helper', call: () => ({ path: `/api/recipes?householdId=${H.id}` }) },
   'GET /api/recipes/:id': { access: 'helper', call: () => ({ path: `/api/recipes/usda-dried-beans-hot-pack?householdId=${H.id}` }) },
-  'PATCH /api/recipes/:id': { access: 'admin', call: () => ({ path: '/api/recipes/usda-baked-beans', body: { summary: 'Baked beans in sauce, pints and quarts.' } }) },
+  'POST /api/recipes': { access: 'admin', call: () => ({ path: '/api/recipes', body: libraryRecipe() }) },
+  'PUT /api/recipes/:id': { access: 'admin', call: async () => ({ path: `/api/recipes/${await freshLibraryRecipe()}`, body: libraryRecipe({ summary: 'Dried peas, pints and quarts.', reason: 'Summary shortened for the Recipe book.' }) }) },
+  'POST /api/recipes/:id/retire': { access: 'admin', call: async () => ({ path: `/api/recipes/${await freshLibraryRecipe()}/retire`, body: { reason: 'A duplicate of the dried beans entry.' } }) },
+  'POST /api/recipes/:id/restore': { access: 'admin', call: async () => ({ path: `/api/recipes/${await freshLibraryRecipe(true)}/restore`, body: { reason: 'Retired by mistake; it is published.' } }) },
 
   'GET /api/households/:id': { access: 'helper', call: () => ({ path: hh('') }) },
   'PATCH /api/households/:id': { access: 'owner', call: () => ({ path: hh(''), body: { altitudeFt: 2500 } }) },

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { ApiClient, expectField, startServer, type RunningServer } from '../support/server'
+import { libraryRecipe } from '../support/recipes'
 
 let server: RunningServer
 let owner: ApiClient
@@ -82,7 +83,7 @@ describe('the Recipe book', () => {
   })
 
   it('lets only a site admin edit a shared recipe', async () => {
-    const res = await owner.patch('/api/recipes/usda-dried-beans-hot-pack', { name: 'Beans, renamed' })
+    const res = await owner.put('/api/recipes/usda-dried-beans-hot-pack', libraryRecipe({ name: 'Beans, renamed' }))
     expect(res.status).toBe(403)
     const still = await helper.get(`/api/recipes/usda-dried-beans-hot-pack?householdId=${householdId}`)
     expect(still.body.name).toBe('Dried beans or peas, hot pack')

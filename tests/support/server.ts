@@ -98,6 +98,7 @@ export class ApiClient {
   get(path: string) { return this.request('GET', path) }
   post(path: string, body?: unknown) { return this.request('POST', path, body ?? {}) }
   patch(path: string, body: unknown) { return this.request('PATCH', path, body) }
+  put(path: string, body: unknown) { return this.request('PUT', path, body) }
   delete(path: string) { return this.request('DELETE', path) }
 
   async login(email: string, password = 'put-up-2026') {

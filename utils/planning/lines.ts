@@ -54,6 +54,7 @@ export function planLine(line: PlanLineRequest, i: number, ctx: LineContext): Pl
   const { catalogue, system } = ctx
   const recipe = catalogue.recipes.find(r => r.id === line.recipeId)
   if (!recipe) throw new PlanningRefusal('Choose a recipe from the recipe book.', `${field}.recipeId`)
+  if (recipe.retired) throw new PlanningRefusal(`${recipe.retired} Choose another recipe.`, `${field}.recipeId`)
   const jar = catalogue.jarSizes.find(j => j.id === line.jarSizeId)
   if (!jar) throw new PlanningRefusal('Choose a jar size from the catalogue.', `${field}.jarSizeId`)
   const ingredient = catalogue.ingredients.find(g => g.id === recipe.ingredientId)

@@ -64,6 +64,8 @@ export interface Recipe {
   pressureBands: PressureBand[]
   source: string
   caution?: string
+  /** Set when the recipe (or the tested recipe a house recipe borrows from) left the shared library: why, in a sentence. */
+  retired?: string
 }
 
 export interface Canner {

@@ -68,20 +68,13 @@ export const HouseRecipeSchema = z.object({
 })
 export type HouseRecipeInput = z.infer<typeof HouseRecipeSchema>
 
-/** What an admin may change on a shared recipe; times and pressures stay as seeded from the source. */
-export const SharedRecipePatchSchema = z.object({
-  name: z.string().trim().min(1, 'Name the recipe.').max(120),
-  summary: z.string().trim().max(600),
-  steps: z.string().trim().min(1, 'Write the steps.').max(6000),
-  source: z.string().trim().min(10, 'Name the published source, with its title and edition.').max(600),
-}).partial().refine(b => Object.keys(b).length > 0, 'Send at least one of name, summary, steps or source.')
-
 interface BaseRecipe {
   id: string
   name: string
   status: 'tested' | 'house'
   householdId: string | null
   source: string
+  retired?: string
   processMinutes: Array<{ jarKey: string, minutes: number }>
   pressureBands: Array<{ gaugeType: GaugeType, minFt: number, maxFt: number, psi: number, source: string }>
 }
@@ -110,6 +103,7 @@ export function houseRecipeTables(
   if (!base || base.processMinutes.length === 0) {
     return { status: 400, issues: [{ field: 'basedOnRecipeId', message: 'Choose one of the shared tested recipes: a house recipe borrows its process time and pressure from one.' }] }
   }
+  if (base.retired) return { status: 422, issues: [{ field: 'basedOnRecipeId', message: `${base.retired} Choose another tested recipe.` }] }
   if (!ingredients.some(i => i.id === body.ingredientId)) {
     return { status: 400, issues: [{ field: 'ingredientId', message: 'That bean is not in the ingredient list.' }] }
   }

@@ -2,10 +2,10 @@ import { HouseholdQuerySchema, RecipeParamsSchema } from '~~/utils/schemas/catal
 
 /**
  * One recipe the household may see, with its ingredient's cup weight and expansion ratio and
- * their sources. Another household's house recipe is a 404, like one that does not exist.
+ * their sources, and the history of its published values. Another household's house recipe is a 404, like one that does not exist.
  */
 export default defineEventHandler(async (event) => {
-  await requireSession(event)
+  const { user } = await requireSession(event)
   const { id } = validParams(event, RecipeParamsSchema)
   const { householdId } = validQuery(event, HouseholdQuerySchema)
   const { db } = await requireMembership(event, householdId, 'helper')
@@ -17,5 +17,6 @@ export default defineEventHandler(async (event) => {
     ...recipe,
     ingredient: ingredients.find(i => i.id === recipe.ingredientId) ?? null,
     basedOn: basedOn ? { id: basedOn.id, name: basedOn.name, source: basedOn.source } : null,
+    history: await recipeHistory(db, recipe.id, user.isAdmin),
   }
 })

@@ -19,17 +19,23 @@ export const referenceData = pgTable('reference_data', {
 })
 
 /**
- * What a reference version changed in this database: one row per changed value, so a saved plan
- * computed before the change can say what changed when it is opened. `recipeId` is null for a
- * change that touches every recipe (a jar size, an ingredient).
+ * What changed in the published reference data of this database: one row per changed value, so
+ * a saved plan computed before the change can say what changed when it is opened, and a shared
+ * recipe shows its history. A row comes either from a reference version shipped with the code
+ * (`version` set, `changedBy` null) or from a site admin's edit (`version` null, `changedBy`,
+ * `reason` and the recipe's `source` citation at the time). `recipeId` is null for a change that
+ * touches every recipe (a jar size, an ingredient).
  */
 export const referenceChanges = pgTable('reference_changes', {
   id: uuid('id').primaryKey().defaultRandom(),
-  version: integer('version').notNull(),
+  version: integer('version'),
   recipeId: text('recipe_id'),
   what: text('what').notNull(),
+  changedBy: uuid('changed_by').references(() => users.id, { onDelete: 'set null' }),
+  reason: text('reason'),
+  source: text('source'),
   appliedAt: timestamp('applied_at', { withTimezone: true }).notNull().defaultNow(),
-}, t => [index('reference_changes_applied_idx').on(t.appliedAt)])
+}, t => [index('reference_changes_applied_idx').on(t.appliedAt), index('reference_changes_recipe_idx').on(t.recipeId)])
 
 export const jarSizes = pgTable('jar_sizes', {
   id: text('id').primaryKey(),
@@ -80,6 +86,9 @@ export const recipes = pgTable('recipes', {
   /** The canner's own words, appended to a house recipe's fixed untested caution. */
   cautionNote: text('caution_note'),
   createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+  /** A shared recipe a site admin took out of the library: kept for the plans that name it, never planned again. */
+  retiredAt: timestamp('retired_at', { withTimezone: true }),
+  retiredReason: text('retired_reason'),
   ...timestamps,
 }, t => [index('recipes_household_idx').on(t.householdId)])
 

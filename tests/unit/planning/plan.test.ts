@@ -95,6 +95,13 @@ describe('dry pack in a large dial-gauge canner at 3,500 ft', () => {
 })
 
 describe('refusals', () => {
+  it('refuses a recipe retired from the shared library, saying why, on the line that names it', () => {
+    const retired = { ...usdaDryBeans, retired: 'Dried beans, hot pack was retired from the shared library on 2026-11-30: a duplicate entry.' }
+    const cat = { ...catalogue, recipes: catalogue.recipes.map(r => (r.id === usdaDryBeans.id ? retired : r)) }
+    const e = refusal(() => plan(request([jars(usdaDryBeans.id, pint.id, 9)]), cat))
+    expect(e.field).toBe('lines[0].recipeId')
+    expect(e.message).toBe(`${retired.retired} Choose another recipe.`)
+  })
   it('a dial gauge above 8,000 ft', () => {
     const e = refusal(() => plan(request([jars(usdaDryBeans.id, pint.id, 9)], { canners: [dialCanner], altitudeFt: 8500 })))
     expect(e.message).toMatch(/above 8,000 ft/)
