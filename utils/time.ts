@@ -86,3 +86,14 @@ export function relativeHours(iso: string, now: string): string {
   if (hours === 0) return 'now'
   return hours > 0 ? `in ${hours} h` : `${-hours} h ago`
 }
+
+/**
+ * A plan's step time ("2026-12-05T19:15:00", its own wall clock, maybe with an offset) as the
+ * kitchen reads it: "7:15 PM". The wall clock is shown as
+ * written, whatever the offset. "7:15 PM on Friday" with the weekday.
+ */
+export function formatWallClock(iso: string, withDay = false): string {
+  const wall = new Date(`${iso.slice(0, 19)}Z`)
+  const time = wall.toLocaleString('en-US', { hour: 'numeric', minute: '2-digit', timeZone: 'UTC' })
+  return withDay ? `${time} on ${wall.toLocaleString('en-US', { weekday: 'long', timeZone: 'UTC' })}` : time
+}

@@ -27,6 +27,12 @@ export type IngredientForm = (typeof ingredientForms)[number]
 export const recipeStatuses = ['tested', 'house'] as const
 export type RecipeStatus = (typeof recipeStatuses)[number]
 
+/** Hydrating dried beans (CG Guide 4): soak 12–18 h, or the quick method (boil 2 min, stand 1 h). */
+export const soakMethods = ['overnight', 'quick'] as const
+export type SoakMethodName = (typeof soakMethods)[number]
+/** What a recipe allows: either soak, the quick one only, or none (fresh beans, dry pack). */
+export const recipeSoaks = ['either', 'quick', 'none'] as const
+
 export const packStyles = ['hot', 'raw', 'dry'] as const
 export type PackStyle = (typeof packStyles)[number]
 

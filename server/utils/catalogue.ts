@@ -1,5 +1,5 @@
 import { asc, eq, inArray, isNull, or } from 'drizzle-orm'
-import type { Canner, Catalogue, HouseholdSettings, PriceItem, Recipe } from '~~/utils/planning'
+import type { Canner, Catalogue, HouseholdSettings, PriceItem, Recipe, RecipePrep } from '~~/utils/planning'
 import { FUTURE_GAUGE_TEST } from '~~/utils/schemas/catalogue'
 import type { Database } from './database'
 
@@ -17,6 +17,15 @@ function retiredSentence(row: RecipeRow, basis: RecipeRow | undefined): string |
   if (row.retiredAt) return `${row.name} was retired from the shared library on ${day(row.retiredAt)}: ${why(row.retiredReason)}.`
   if (basis?.retiredAt) return `${row.name} borrows its time and pressure from ${basis.name}, which was retired from the shared library on ${day(basis.retiredAt)}: ${why(basis.retiredReason)}.`
   return undefined
+}
+
+/** A dry pack is only sorted and rinsed; household practice, no published source. */
+const DRY_PACK_PREP: RecipePrep = { soak: 'none', cook: null, source: 'Dry pack, household practice: sort and rinse, then measure into jars (no soak)' }
+
+/** A household's house recipe prepares as its pack says: a dry pack is rinsed, anything else as its tested basis. */
+function prepOf(row: RecipeRow, basis: RecipeRow | undefined): RecipePrep | null {
+  if (row.prep || row.householdId === null) return row.prep
+  return row.packStyle === 'dry' ? DRY_PACK_PREP : basis?.prep ?? null
 }
 
 /**
@@ -41,6 +50,7 @@ export async function loadCatalogue(db: Database, householdId: string) {
     ...row,
     caution: row.caution ?? undefined,
     retired: retiredSentence(row, recipeRows.find(b => b.id === row.basedOnRecipeId)),
+    prep: prepOf(row, recipeRows.find(b => b.id === row.basedOnRecipeId)),
     perJar: specs.filter(s => s.recipeId === row.id && (s.dryGrams !== null || s.saltTsp !== null))
       .map(s => ({ jarKey: s.sizeKey, dryGrams: s.dryGrams ?? undefined, saltTsp: s.saltTsp ?? undefined })),
     processMinutes: specs.filter(s => s.recipeId === row.id && s.processMinutes !== null)

@@ -35,6 +35,7 @@ function recipeColumns(body: SharedRecipeBody) {
     steps: body.steps,
     source: body.source,
     caution: body.caution || null,
+    prep: body.prep,
   }
 }
 

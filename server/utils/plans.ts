@@ -57,14 +57,18 @@ export async function computePlan(db: Database, householdId: string, body: PlanR
 
   try {
     const result = planBatch(
-      { lines, canners, startAt: body.startAt, altitudeFt: body.altitudeFt ?? household.altitudeFt, today: householdToday(household.timeZone) },
+      { lines, canners, startAt: body.startAt, soak: body.soak, altitudeFt: body.altitudeFt ?? household.altitudeFt, today: householdToday(household.timeZone) },
       { ...catalogue, recipes: planningRecipes },
       household,
     )
     // Report the recipe ids the household knows, not the per-bean variants made above.
     const baseId = (id: string) => id.split('~')[0]!
     for (const line of result.lines) line.recipeId = baseId(line.recipeId)
-    for (const load of result.loads) load.recipeIds = [...new Set(load.recipeIds.map(baseId))]
+    for (const load of result.loads) {
+      load.recipeIds = [...new Set(load.recipeIds.map(baseId))]
+      for (const c of load.contents) c.recipeId = baseId(c.recipeId)
+    }
+    for (const step of result.schedule.steps) if (step.recipeId) step.recipeId = baseId(step.recipeId)
     return { ...result, household: { name: household.name, altitudeFt: household.altitudeFt, unitSystem: household.unitSystem } }
   }
   catch (error) {

@@ -42,6 +42,7 @@ export async function referenceValues(tx: Tx): Promise<ReferenceValues> {
     set('steps', 'steps', r.steps, true)
     set('summary', 'summary', r.summary, true)
     set('caution', 'caution', r.caution ?? '', true)
+    set('prep', 'preparation', r.prep ? `soak: ${r.prep.soak}; ${r.prep.cook ? `${r.prep.cook.label}, ${r.prep.cook.minutes} min` : 'no cooking'}` : 'none given')
     // A house recipe follows its tested basis out of the library; the admin's reason goes with the change.
     set('retired', 'status', r.retiredAt ? 'retired' : basis?.retiredAt ? `its tested basis ${basis.name} retired` : 'in the library')
   }

@@ -22,6 +22,7 @@ export function libraryRecipe(overrides: Record<string, unknown> = {}) {
     steps: 'Soak 12 to 18 hours in a cool place, or boil 2 minutes and soak 1 hour. Drain, cover with fresh water and boil 30 minutes. Fill jars with peas and cooking water, leaving 1 inch headspace.',
     source: 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 4 "Beans or peas—shelled, dried, all varieties"',
     caution: null,
+    prep: { soak: 'either', cook: { label: 'drain, cover with fresh water and boil 30 minutes', minutes: 30 }, source: 'CG Guide 4: soak 12–18 h or boil 2 min and stand 1 h; boil 30 min' },
     jars: [
       { sizeKey: 'pint', processMinutes: 75, dryGrams: lb(3.25) / 9, saltTsp: 0.5 },
       { sizeKey: 'quart', processMinutes: 90, dryGrams: lb(0.75), saltTsp: 1 },

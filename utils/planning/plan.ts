@@ -15,7 +15,7 @@ import type { CannerLayout, LineResult, LoadResult, PlanResult } from './results
 import { MAX_JARS_PER_PLAN } from './scaling'
 import { DEFAULT_STEP_MINUTES, buildSchedule, coolDownMinutes, loadMinutes, parseStart } from './schedule'
 import { buildShopping } from './shopping'
-import type { Canner, Catalogue, HouseholdSettings, JarSize, PlanOptions, PlanRequest, UnitSystem } from './types'
+import type { Canner, Catalogue, HouseholdSettings, JarSize, PlanOptions, PlanRequest, Recipe, UnitSystem } from './types'
 import { formatVolume } from './units'
 import { validateHousehold, validateOptions, validateRequest } from './validate'
 import { standingWarnings } from './warnings'
@@ -39,6 +39,12 @@ function sumBy<T>(items: readonly T[], key: (t: T) => string, value: (t: T) => n
  * PlanningRefusal (with the field at fault) when the plan has no published or household basis
  * or the request contradicts itself; otherwise every warning the plan needs is in `warnings`.
  */
+/** "9 × Dried beans or peas, hot pack — Black beans": the recipe and its bean (a variant's name already ends with it). */
+function contentLabel(recipe: Recipe, jars: number, catalogue: Catalogue): string {
+  const bean = catalogue.ingredients.find(g => g.id === recipe.ingredientId)?.name
+  return `${jars} × ${recipe.name.includes(' — ') || !bean ? recipe.name : `${recipe.name} — ${bean}`}`
+}
+
 export function planBatch(
   request: PlanRequest,
   catalogue: Catalogue,
@@ -87,9 +93,16 @@ export function planBatch(
     canners.map(c => c.id),
     (cannerId, jarSizeId) => fit(cannerOf(cannerId), jarOf(jarSizeId)),
     (jarSizeId, minutes) => loadMinutes(minutes, cool(jarSizeId), steps),
-  ).map(load => ({ ...load, gaugeType: cannerOf(load.cannerId).gaugeType, coolMinutes: cool(load.jarSizeId) }))
+  ).map(load => ({
+    ...load,
+    gaugeType: cannerOf(load.cannerId).gaugeType,
+    coolMinutes: cool(load.jarSizeId),
+    // Every load names what is in it: recipe and bean for each line, so two beans on one recipe never read alike.
+    contents: load.contents.map(c => ({ ...c, label: contentLabel(planned[c.lineIndex]!.recipe, c.jars, catalogue) })),
+  }))
   const layouts = [...new Set(loads.map(l => `${l.cannerId}|${l.jarSizeId}`))].map(key => fits.get(key)!)
-  const schedule = buildSchedule(loads, start, steps)
+  const recipesOfDay = [...new Map(planned.map(p => [p.recipe.id, { id: p.recipe.id, name: p.recipe.name, prep: p.recipe.prep }])).values()]
+  const schedule = buildSchedule(loads, start, steps, recipesOfDay, request.soak)
 
   const ingredientOf = (l: LineResult): string => planned[l.lineIndex]!.recipe.ingredientId
   const jarsBySize = sumBy(lines, l => l.jarSizeId, l => l.jars)

@@ -4,7 +4,7 @@
  */
 import type { CostSummary } from './cost'
 import type { PlanWarning } from './errors'
-import type { Load } from './loads'
+import type { Load, LoadContent } from './loads'
 import type { LayerLayout } from './packing'
 import type { Schedule } from './schedule'
 import type { ShoppingItem } from './shopping'
@@ -60,9 +60,11 @@ export interface LineResult {
   processTimeFrom: string
 }
 
-export interface LoadResult extends Load {
+export interface LoadResult extends Omit<Load, 'contents'> {
   gaugeType: 'dial' | 'weighted'
   coolMinutes: number
+  /** Each line's jars in the load, named by recipe and bean ("9 × Dried beans or peas, hot pack — Black beans"). */
+  contents: Array<LoadContent & { label: string }>
 }
 
 export interface CannerLayout extends LayerLayout {

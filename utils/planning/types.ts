@@ -66,6 +66,22 @@ export interface Recipe {
   caution?: string
   /** Set when the recipe (or the tested recipe a house recipe borrows from) left the shared library: why, in a sentence. */
   retired?: string
+  /** What is done before the jars are filled; none given: the jars are only filled. */
+  prep?: RecipePrep | null
+}
+
+/** How dried goods are hydrated before a soaking recipe is cooked (CG Guide 4). */
+export type SoakMethod = 'overnight' | 'quick'
+
+/**
+ * A recipe's preparation before filling: whether the dry goods soak ('either' overnight or the
+ * quick method, 'quick' only, or 'none'), then one cooking step with its minutes (boil 30 min,
+ * bake 4–5 h …), and where the values come from.
+ */
+export interface RecipePrep {
+  soak: 'either' | 'quick' | 'none'
+  cook: { label: string, minutes: number } | null
+  source: string
 }
 
 export interface Canner {
@@ -158,6 +174,8 @@ export interface PlanRequest {
   altitudeFt: number | null
   /** The household's date today (server clock, household time zone): the gauge-test check and the default start. */
   today: string
+  /** How soaking recipes are hydrated; overnight unless said (a recipe that allows only the quick method uses it). */
+  soak?: SoakMethod
 }
 
 export interface Catalogue {

@@ -3,7 +3,7 @@
  * a published process: every table row names its source, the recipe names its citation, and
  * every change says why. Shared by the API routes and the admin's form.
  */
-import { fillBases, gaugeTypes, packStyles } from '../vocabulary'
+import { fillBases, gaugeTypes, packStyles, recipeSoaks } from '../vocabulary'
 import { z } from './z'
 import { MIN_HEADSPACE_MM } from './catalogue'
 
@@ -59,6 +59,16 @@ function bandIssues(bands: Array<z.infer<typeof BandSchema>>, ctx: z.RefinementC
   }
 }
 
+/** Soaking and cooking before the jars are filled, as the source gives it (the Canning day counts back from it). */
+const PrepSchema = z.object({
+  soak: z.enum(recipeSoaks, { errorMap: () => ({ message: 'Choose how the source hydrates the beans: overnight or quick, quick only, or no soak.' }) }),
+  cook: z.object({
+    label: z.string().trim().min(3, 'Say what is done, for example "drain, cover with fresh water and boil 30 minutes".').max(200),
+    minutes: num('Enter the minutes the source gives.').int('Enter whole minutes.').min(1, 'Enter at least 1 minute.').max(600, 'More than 10 hours looks like a typing slip.'),
+  }).nullable(),
+  source: z.string().trim().min(3, 'Name where the soak and cooking times come from.').max(300),
+})
+
 export const SharedRecipeSchema = z.object({
   name: z.string().trim().min(1, 'Name the recipe as its source does.').max(120),
   ingredientId: z.string({ required_error: 'Choose the bean.', invalid_type_error: 'Choose the bean.' }).min(1, 'Choose the bean.'),
@@ -73,6 +83,7 @@ export const SharedRecipeSchema = z.object({
   source: z.string({ required_error: 'Name the published source, with its title and edition.' }).trim()
     .min(10, 'Name the published source, with its title and edition.').max(600),
   caution: z.string().trim().max(600).nullable().default(null),
+  prep: PrepSchema.nullable().default(null),
   jars: z.array(JarRowSchema).min(1, 'Give the process time of at least one jar size.').max(5)
     .refine(jars => new Set(jars.map(j => j.sizeKey)).size === jars.length, 'Give each jar size once.'),
   pressureBands: z.array(BandSchema).min(1, 'Give the published pressure for at least one gauge type.').max(16).superRefine(bandIssues),

@@ -3,7 +3,8 @@
  * their process tables, and the version row that brings corrections to an existing database.
  * Sources live in columns.
  */
-import { doublePrecision, index, integer, pgTable, primaryKey, text, timestamp, uuid, type AnyPgColumn } from 'drizzle-orm/pg-core'
+import { doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, uuid, type AnyPgColumn } from 'drizzle-orm/pg-core'
+import type { RecipePrep } from '../../../utils/planning/types'
 import { fillBases, gaugeTypes, ingredientForms, jarMouths, packStyles, recipeStatuses } from '../../../utils/vocabulary'
 import { timestamps } from './columns'
 import { users, households } from './people'
@@ -81,6 +82,8 @@ export const recipes = pgTable('recipes', {
   steps: text('steps').notNull().default(''),
   source: text('source').notNull(),
   caution: text('caution'),
+  /** The preparation before filling (soak, cook), with its source; null: only filling. A house recipe's follows its pack. */
+  prep: jsonb('prep').$type<RecipePrep>(),
   /** A house recipe's basis: the tested recipe whose process table it copies. */
   basedOnRecipeId: text('based_on_recipe_id').references((): AnyPgColumn => recipes.id),
   /** The canner's own words, appended to a house recipe's fixed untested caution. */

@@ -12,7 +12,7 @@ import type { recipeJarSpecs, recipes } from '../schema'
  * (a process time, a pressure band, a jar's capacity): a database holding an older version gets
  * the corrected rows at the next start, in one transaction.
  */
-export const REFERENCE_VERSION = 1
+export const REFERENCE_VERSION = 2
 
 const INCH_MM = 25.4
 const POUND_G = 453.59237
@@ -98,6 +98,10 @@ const QUART_DRY_G = 0.75 * POUND_G
 
 const HYDRATE = 'Sort and rinse the beans. Soak 12–18 hours in cold water in a cool place, or cover with boiling water, boil 2 minutes, take off the heat and soak 1 hour. Drain.'
 
+const GUIDE_4 = 'USDA Complete Guide to Home Canning (2015), Guide 4'
+/** Time to bring a pot of beans back to a boil: common practice, no published source. */
+const TO_A_BOIL_MIN = 15
+
 /** A shared library recipe row, with its per-jar-size specs beside it. */
 export type RecipeSeed = Omit<typeof recipes.$inferInsert, 'householdId' | 'createdBy' | 'createdAt' | 'updatedAt'> & {
   jarSpecs: Array<Omit<typeof recipeJarSpecs.$inferInsert, 'recipeId'>>
@@ -117,6 +121,7 @@ export const recipeSeed: RecipeSeed[] = [
     steps: `${HYDRATE} Cover with fresh water and boil 30 minutes. Add ½ tsp salt per pint or 1 tsp per quart if desired. Fill jars with beans and cooking water, leaving 1 inch headspace.`,
     source: 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 4 "Beans or peas—shelled, dried, all varieties"; MSU Extension PFS 01600235; UF/IFAS EDIS HE8302',
     caution: null,
+    prep: { soak: 'either', cook: { label: 'drain, cover with fresh water and boil 30 minutes', minutes: 30 }, source: `${GUIDE_4} "Beans or peas—shelled, dried": soak 12–18 h, or boil 2 min and stand 1 h; boil 30 min` },
     jarSpecs: [
       { sizeKey: 'pint', dryGrams: PINT_DRY_G, saltTsp: 0.5, processMinutes: 75 },
       { sizeKey: 'quart', dryGrams: QUART_DRY_G, saltTsp: 1, processMinutes: 90 },
@@ -135,6 +140,7 @@ export const recipeSeed: RecipeSeed[] = [
     steps: 'Cover each cup of beans with 3 cups water, boil 2 minutes, soak 1 hour, drain. Bring to a boil in fresh water and keep the liquid for the sauce. Fill jars ¾ full with hot beans, add a ¾-inch cube of pork if desired, top with hot sauce leaving 1 inch headspace.',
     source: 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 4 "Beans, dry, with tomato or molasses sauce"; MSU Extension PFS 01600236; UF/IFAS EDIS FCS8304',
     caution: null,
+    prep: { soak: 'quick', cook: { label: 'drain, bring to a boil in fresh water and keep the liquid for the sauce', minutes: TO_A_BOIL_MIN }, source: `${GUIDE_4} "Beans, dry, with tomato or molasses sauce": quick soak; ${TO_A_BOIL_MIN} min to a boil: common practice, no published source` },
     jarSpecs: [
       { sizeKey: 'pint', dryGrams: PINT_DRY_G, saltTsp: null, processMinutes: 65 },
       { sizeKey: 'quart', dryGrams: QUART_DRY_G, saltTsp: null, processMinutes: 75 },
@@ -153,6 +159,7 @@ export const recipeSeed: RecipeSeed[] = [
     steps: 'Soak and boil as for beans in sauce. Bake 4–5 hours at 350 °F with molasses sauce and pork. Fill jars hot, leaving 1 inch headspace.',
     source: 'USDA Complete Guide to Home Canning (AIB 539, rev. 1994 and 2015), Guide 4 "Beans, baked"; MSU Extension PFS 01600237',
     caution: null,
+    prep: { soak: 'quick', cook: { label: 'drain, bring to a boil, then bake 4–5 hours at 350 °F with the molasses sauce', minutes: 4 * 60 }, source: `${GUIDE_4} "Beans, baked": soak and boil as for beans in sauce, bake 4–5 h at 350 °F (the shortest bake is timed)` },
     jarSpecs: [
       { sizeKey: 'pint', dryGrams: PINT_DRY_G, saltTsp: null, processMinutes: 65 },
       { sizeKey: 'quart', dryGrams: QUART_DRY_G, saltTsp: null, processMinutes: 75 },
@@ -171,6 +178,7 @@ export const recipeSeed: RecipeSeed[] = [
     steps: 'Cover each cup of beans with 3 cups water, boil 2 minutes, soak 1 hour, heat to a boil. Combine with the other soup ingredients and boil 5 minutes. Do not thicken. Fill jars halfway with solids, top with liquid, leaving 1 inch headspace.',
     source: 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 4 "Soups"; MSU Extension PFS 01600886',
     caution: 'Soups with seafood need 100 minutes for pints and quarts; this entry is for soups without seafood.',
+    prep: { soak: 'quick', cook: { label: 'drain, heat to a boil in fresh water, combine with the other ingredients and boil 5 minutes', minutes: TO_A_BOIL_MIN + 5 }, source: `${GUIDE_4} "Soups": boil 2 min, soak 1 h, heat to a boil, boil 5 min combined; ${TO_A_BOIL_MIN} min to a boil: common practice, no published source` },
     jarSpecs: [
       { sizeKey: 'pint', dryGrams: null, saltTsp: null, processMinutes: 60 },
       { sizeKey: 'quart', dryGrams: null, saltTsp: null, processMinutes: 75 },
@@ -189,6 +197,7 @@ export const recipeSeed: RecipeSeed[] = [
     steps: 'Shell and wash the beans. Cover with boiling water and bring to a boil. Fill jars loosely with the hot beans, add 1 tsp salt per quart if desired, top with boiling water leaving 1 inch headspace.',
     source: 'USDA Complete Guide to Home Canning (AIB 539, rev. 2015), Guide 4 "Beans, lima—shelled"; MSU Extension PFS 01600712 (28 lb in pods per 7 quarts, 18 lb per 9 pints)',
     caution: null,
+    prep: { soak: 'none', cook: { label: 'shell and wash the beans, cover with boiling water and bring to a boil', minutes: 30 }, source: `${GUIDE_4} "Beans, lima—shelled"; 30 min for shelling and boiling: common practice, no published source` },
     jarSpecs: [
       { sizeKey: 'pint', dryGrams: (18 * POUND_G) / 9, saltTsp: 0.5, processMinutes: 40 },
       { sizeKey: 'quart', dryGrams: (28 * POUND_G) / 7, saltTsp: 1, processMinutes: 50 },
@@ -208,6 +217,7 @@ export const recipeSeed: RecipeSeed[] = [
     source: 'Household practice; no published process. Time and pressure borrowed from the USDA hot-pack table (CG Guide 4), which was tested only for soaked and boiled beans.',
     basedOnRecipeId: 'usda-dried-beans-hot-pack',
     caution: 'Untested — your own risk. Dry-packing (no soak) is not a laboratory-tested process: USDA and extension guidance (OSU EM 9435, 2024; Penn State Extension) say dried beans must be hydrated before canning. Never exceed the fill cap: beans swell about threefold and can crowd out the liquid or break the jar.',
+    prep: { soak: 'none', cook: null, source: 'Household practice: sort and rinse, then measure into jars (no soak)' },
     jarSpecs: [
       { sizeKey: 'pint', dryGrams: null, saltTsp: 0.25, processMinutes: 75 },
       { sizeKey: 'quart', dryGrams: null, saltTsp: 0.5, processMinutes: 90 },

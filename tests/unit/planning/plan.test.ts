@@ -131,6 +131,13 @@ describe('refusals', () => {
 })
 
 describe('more than one line or canner', () => {
+  it('names each bean in a shared load: two beans on one recipe are never an unnamed load', () => {
+    const kidney = { ...usdaDryBeans, id: `${usdaDryBeans.id}~kidney`, ingredientId: 'i-kidney', name: `${usdaDryBeans.name} — Kidney beans` }
+    const cat = { ...catalogue, recipes: [...catalogue.recipes, kidney] }
+    const r = plan(request([jars(usdaDryBeans.id, pint.id, 5), jars(kidney.id, pint.id, 4)]), cat)
+    expect(r.loads).toHaveLength(1)
+    expect(r.loads[0]!.contents.map(c => c.label)).toEqual([`5 × ${usdaDryBeans.name} — Black beans`, `4 × ${usdaDryBeans.name} — Kidney beans`])
+  })
   it('two canners side by side: 18 pints in 150 minutes instead of 300', () => {
     const second = { ...standardCanner, id: 'c-std-2', name: 'Second canner' }
     const r = plan(request([jars(usdaDryBeans.id, pint.id, 18)], { canners: [standardCanner, second] }))

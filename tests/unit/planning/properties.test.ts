@@ -122,7 +122,7 @@ describe('schedule', () => {
   test.prop([fc.array(loadArb, { maxLength: 12 }), stepsArb])(
     'steps on one canner never overlap and the day ends with the last step',
     (specs, over) => {
-      const loads = specs.map((s, i) => ({ index: i + 1, ...s }))
+      const loads = specs.map((s, i) => ({ index: i + 1, ...s, gaugeType: 'weighted' as const, pressurePsi: 10 }))
       const s = buildSchedule(loads, parseStart('2025-09-14T08:00Z', '2025-09-14'), { ...DEFAULT_STEP_MINUTES, ...over })
       for (const id of ['a', 'b']) {
         const steps = s.steps.filter(x => x.cannerId === id).sort((x, y) => x.startMinute - y.startMinute || x.endMinute - y.endMinute)
