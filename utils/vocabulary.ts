@@ -73,3 +73,14 @@ export const activityKinds = [
   'plan', 'market', 'load', 'seal-check', 'shelf', 'photo',
 ] as const
 export type ActivityKind = (typeof activityKinds)[number]
+
+/**
+ * What can be pressed on the Canning day: a load's steps in their published order, a kitchen
+ * task's start, pause, resume and done, and undo (the last action of a load or task).
+ */
+export const dayEventKinds = [
+  'start-heat', 'start-vent', 'close-vent', 'pressure-reached', 'pressure-dropped', 'process-done', 'stop-early', 'at-zero', 'open', 'out',
+  'task-start', 'task-pause', 'task-resume', 'task-done',
+  'undo',
+] as const
+export type DayEventKind = (typeof dayEventKinds)[number]

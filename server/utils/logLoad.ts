@@ -41,7 +41,16 @@ function requiredFor(
  * load, when it was logged from a plan); a load run with less is flagged with what to do.
  * Filling the jars takes them out of the household's empty-jar stock (never below 0).
  */
-export async function createLoad(db: Database, householdId: string, userId: string, body: LoadCreateInput) {
+/** The times the Canning day recorded for a load as it ran; such a load waits for the canner to confirm it. */
+export interface DayRecord {
+  ventStartedAt: Date | null
+  pressureReachedAt: Date | null
+  processStartedAt: Date | null
+  processEndedAt: Date | null
+  pressureDrops: string[]
+}
+
+export async function createLoad(db: Db, householdId: string, userId: string, body: LoadCreateInput, day?: DayRecord) {
   const [{ catalogue, recipes }, [household], [canner]] = await Promise.all([
     loadCatalogue(db, householdId),
     db.select().from(tables.households).where(eq(tables.households.id, householdId)),
@@ -96,6 +105,9 @@ export async function createLoad(db: Database, householdId: string, userId: stri
       shortfall,
       notes: body.notes,
       createdBy: userId,
+      ...(day ?? {}),
+      confirmedAt: day ? null : serverNow(),
+      confirmedBy: day ? null : userId,
     }).returning({ id: tables.canningLoads.id })
     await tx.insert(tables.loadLines).values(lines.map((line, i) => ({
       loadId: load!.id,
@@ -123,8 +135,8 @@ export async function createLoad(db: Database, householdId: string, userId: stri
   return loadDetail(db, householdId, id)
 }
 
-/** Record how a pending reprocessing load was run, or change a load's notes. */
-export async function updateLoad(db: Database, householdId: string, loadId: string, body: LoadUpdateInput) {
+/** Record how a pending reprocessing load was run, change a load's notes, or confirm a load the Canning day logged. */
+export async function updateLoad(db: Database, householdId: string, loadId: string, body: LoadUpdateInput, userId?: string) {
   const load = await requireLoad(db, householdId, loadId)
   const run = body.pressurePsi !== undefined || body.processMinutes !== undefined || body.startedAt !== undefined || body.endedAt !== undefined
   if (run && load.status !== 'pending') refusal('This load is already logged; only its notes can change. Log a new load for another run.')
@@ -135,7 +147,8 @@ export async function updateLoad(db: Database, householdId: string, loadId: stri
   }
   await db.transaction(async (tx) => {
     if (!run) {
-      await tx.update(tables.canningLoads).set({ notes: body.notes ?? load.notes, updatedAt: serverNow() }).where(eq(tables.canningLoads.id, load.id))
+      const confirm = body.confirmed && !load.confirmedAt ? { confirmedAt: serverNow(), confirmedBy: userId ?? null } : {}
+      await tx.update(tables.canningLoads).set({ notes: body.notes ?? load.notes, ...confirm, updatedAt: serverNow() }).where(eq(tables.canningLoads.id, load.id))
       return
     }
     const required = load.requiredPsi !== null && load.requiredMinutes !== null ? { psi: load.requiredPsi, minutes: load.requiredMinutes } : null
@@ -153,6 +166,7 @@ export async function updateLoad(db: Database, householdId: string, loadId: stri
       endedAt,
       shortfall,
       notes: body.notes ?? load.notes,
+      confirmedAt: serverNow(),
       updatedAt: serverNow(),
     }).where(and(eq(tables.canningLoads.id, load.id), eq(tables.canningLoads.status, 'pending')))
     await scheduleSealReminder(tx, householdId, load.id, endedAt)

@@ -2,7 +2,7 @@ import { and, asc, eq, gt, inArray, isNull, or } from 'drizzle-orm'
 import { planBatch, PlanningRefusal, type PlanLineRequest, type PlanResult } from '~~/utils/planning'
 import type { PlanLineBody, PlanRequestBody } from '~~/utils/schemas/plan'
 import { loadCanners, loadCatalogue, loadHouseholdSettings, toPlanningCanner } from './catalogue'
-import type { Database } from './database'
+import type { Database, Db } from './database'
 
 function amountOf(line: PlanLineBody): PlanLineRequest['amount'] {
   if (line.jars !== undefined) return { mode: 'jars', jars: line.jars }
@@ -88,7 +88,7 @@ function requestField(field: string | undefined, body: PlanRequestBody): string 
 }
 
 /** A saved plan of this household, or a 404 that reveals nothing about other households. */
-export async function requirePlan(db: Database, householdId: string, planId: string) {
+export async function requirePlan(db: Db, householdId: string, planId: string) {
   const [plan] = await db.select().from(tables.plans)
     .where(and(eq(tables.plans.id, planId), eq(tables.plans.householdId, householdId)))
   if (!plan) notFound('No such plan in this household.')

@@ -2,9 +2,73 @@ import { and, asc, eq, isNotNull, isNull } from 'drizzle-orm'
 import { dateIn, formatDateTime } from '~~/utils/time'
 import { REPROCESS_WITHIN_HOURS, bestByDate, loadCode, sealRate, sealRatesBy, sealWindow } from '~~/utils/after'
 import type { SealCheckInput } from '~~/utils/schemas/logbook'
-import type { Database } from './database'
+import type { UnsealedAction } from '~~/utils/vocabulary'
+import { recordActivity } from './activity'
+import { serverNow } from './clock'
+import type { Database, Tx } from './database'
 import { loadDetail, requireLoad } from './logbook'
 import { nextLoadNumber } from './logLoad'
+
+type LoadRow = typeof tables.canningLoads.$inferSelect
+type LineRow = typeof tables.loadLines.$inferSelect
+interface OffShelf { line: LineRow, jars: number, action: UnsealedAction }
+
+/**
+ * Jars that may not go on the Shelf: to the refrigerator list, or into one new pending load for
+ * reprocessing before `reprocessBy` with a new lid and the same process time.
+ */
+async function sendOffShelf(tx: Tx, ctx: { householdId: string, userId: string, load: LoadRow, now: Date, reprocessBy: Date }, jars: OffShelf[]) {
+  const { householdId, userId, load, now } = ctx
+  for (const { line, jars: n, action } of jars) {
+    if (action === 'refrigerate') {
+      await tx.insert(tables.fridgeItems).values({ householdId, loadId: load.id, loadLineId: line.id, product: line.product, jarSizeId: line.jarSizeId, jars: n, refrigeratedAt: now })
+    }
+  }
+  const reprocess = jars.filter(j => j.action === 'reprocess')
+  if (!reprocess.length) return
+  const number = await nextLoadNumber(tx, householdId)
+  const [again] = await tx.insert(tables.canningLoads).values({
+    householdId, number, status: 'pending', reprocessOfId: load.id, planId: load.planId, planLoadIndex: load.planLoadIndex,
+    cannerId: load.cannerId, cannerName: load.cannerName, gaugeType: load.gaugeType, altitudeFt: load.altitudeFt,
+    requiredPsi: load.requiredPsi, requiredMinutes: load.requiredMinutes, requiredSource: load.requiredSource,
+    deadlineAt: ctx.reprocessBy, createdBy: userId,
+    notes: `Reprocessing ${reprocess.reduce((s, r) => s + r.jars, 0)} jars from load ${loadCode(load.number)}: remove the lids, check the rims, use new lids, and process for the same time.`,
+  }).returning({ id: tables.canningLoads.id })
+  await tx.insert(tables.loadLines).values(reprocess.map((r, i) => ({
+    loadId: again!.id, householdId, lineIndex: i, recipeId: r.line.recipeId, product: r.line.product, jarSizeId: r.line.jarSizeId, jars: r.jars,
+  })))
+}
+
+/**
+ * Decide at once what happens to an under-processed load (it got less than its published
+ * pressure or minutes): none of its jars may go on the Shelf, so there is no seal check to wait
+ * for — all its jars go to the refrigerator list, or are reprocessed within 24 h of coming out.
+ */
+export async function decideUnsafeLoad(db: Database, householdId: string, userId: string, loadId: string, action: UnsealedAction) {
+  const now = serverNow()
+  await db.transaction(async (tx) => {
+    const [load] = await tx.select().from(tables.canningLoads)
+      .where(and(eq(tables.canningLoads.id, loadId), eq(tables.canningLoads.householdId, householdId))).for('update')
+    if (!load) notFound('No such load in this household.')
+    if (!load.shortfall || load.status !== 'done' || !load.endedAt) refusal('This load got its published pressure and minutes: check its seals 12–24 hours after it came out instead.', 'loadId')
+    const window = sealWindow(load.endedAt, now)
+    if (action === 'reprocess' && now > window.reprocessBy) {
+      refusal(`It is more than ${REPROCESS_WITHIN_HOURS} hours since load ${loadCode(load.number)} came out, too late to reprocess (USDA Complete Guide, "Reprocessing unsealed jars"). Refrigerate the jars and eat them within several days.`, 'action')
+    }
+    const [check] = await tx.insert(tables.sealChecks).values({
+      loadId: load.id, householdId, checkedAt: now, checkedBy: userId,
+      notes: `Under-processed: every jar ${action === 'refrigerate' ? 'went to the refrigerator' : 'is to be reprocessed'}, decided when it came out.`,
+    }).onConflictDoNothing().returning()
+    if (!check) conflict(`What happens to load ${loadCode(load.number)} is already decided.`)
+    const lines = await tx.select().from(tables.loadLines).where(eq(tables.loadLines.loadId, load.id))
+    for (const line of lines) await tx.update(tables.loadLines).set({ unsealedAction: action }).where(eq(tables.loadLines.id, line.id))
+    await sendOffShelf(tx, { householdId, userId, load, now, reprocessBy: window.reprocessBy }, lines.map(line => ({ line, jars: line.jars, action })))
+    await tx.update(tables.reminders).set({ cancelledAt: now, updatedAt: now })
+      .where(and(eq(tables.reminders.loadId, load.id), eq(tables.reminders.kind, 'seal-check')))
+    await recordActivity(tx, { householdId, userId, kind: 'seal-check', summary: `Load ${loadCode(load.number)} was under-processed: ${action === 'refrigerate' ? 'refrigerated its jars' : 'set its jars to be reprocessed'}`, detail: { loadId } })
+  })
+  return loadDetail(db, householdId, loadId)
+}
 
 /**
  * Record a load's seal check: 12 h or more after it came out (USDA CG "Cooling jars": cool
@@ -58,7 +122,7 @@ export async function recordSealCheck(db: Database, householdId: string, userId:
     const [check] = await tx.insert(tables.sealChecks).values({ loadId: load.id, householdId, checkedAt: now, checkedBy: userId, notes: body.notes })
       .onConflictDoNothing().returning()
     if (!check) conflict(`The seal check of load ${code} is already recorded.`)
-    const reprocess: Array<{ line: typeof lines[number], jars: number }> = []
+    const offShelfJars: OffShelf[] = []
     for (const { line, input } of plan) {
       const offShelf = unsafe ? line.jars : input.unsealed
       const toShelf = line.jars - offShelf
@@ -70,24 +134,9 @@ export async function recordSealCheck(db: Database, householdId: string, userId:
           loadCode: code, cannedOn, bestBy, jarsIn: toShelf, jarsLeft: toShelf, source: 'seal-check', shelvedAt: now,
         })
       }
-      if (offShelf > 0 && input.action === 'refrigerate') {
-        await tx.insert(tables.fridgeItems).values({ householdId, loadId: load.id, loadLineId: line.id, product: line.product, jarSizeId: line.jarSizeId, jars: offShelf, refrigeratedAt: now })
-      }
-      if (offShelf > 0 && input.action === 'reprocess') reprocess.push({ line, jars: offShelf })
+      if (offShelf > 0) offShelfJars.push({ line, jars: offShelf, action: input.action! })
     }
-    if (reprocess.length) {
-      const number = await nextLoadNumber(tx, householdId)
-      const [again] = await tx.insert(tables.canningLoads).values({
-        householdId, number, status: 'pending', reprocessOfId: load.id, planId: load.planId, planLoadIndex: load.planLoadIndex,
-        cannerId: load.cannerId, cannerName: load.cannerName, gaugeType: load.gaugeType, altitudeFt: load.altitudeFt,
-        requiredPsi: load.requiredPsi, requiredMinutes: load.requiredMinutes, requiredSource: load.requiredSource,
-        deadlineAt: window.reprocessBy, createdBy: userId,
-        notes: `Reprocessing ${reprocess.reduce((s, r) => s + r.jars, 0)} jars from load ${code}: remove the lids, check the rims, use new lids, and process for the same time.`,
-      }).returning({ id: tables.canningLoads.id })
-      await tx.insert(tables.loadLines).values(reprocess.map((r, i) => ({
-        loadId: again!.id, householdId, lineIndex: i, recipeId: r.line.recipeId, product: r.line.product, jarSizeId: r.line.jarSizeId, jars: r.jars,
-      })))
-    }
+    await sendOffShelf(tx, { householdId, userId, load, now, reprocessBy: window.reprocessBy }, offShelfJars)
     await tx.update(tables.reminders).set({ cancelledAt: now, updatedAt: now })
       .where(and(eq(tables.reminders.loadId, load.id), eq(tables.reminders.kind, 'seal-check')))
   })

@@ -47,12 +47,12 @@ const people = {} as Record<Exclude<Identity, 'anonymous'>, { email: string, pas
 const ids = {} as Record<string, string>
 const hh = (path: string) => `/api/households/${H.id}${path}`
 
-/** A load of H that came out 20 h ago, so its seal check is due. */
-async function freshLoad(): Promise<{ id: string, lines: Array<{ id: string }> }> {
+/** A load of H that came out 20 h ago, so its seal check is due (run for fewer minutes than 75: under-processed). */
+async function freshLoad(processMinutes = 75): Promise<{ id: string, lines: Array<{ id: string }> }> {
   const res = await clients.owner.post(hh('/loads'), {
     cannerId: H.cannerId,
     lines: [{ recipeId: 'usda-dried-beans-hot-pack', jarSizeId: 'pint-regular', jars: 2, product: 'Pinto beans' }],
-    pressurePsi: 15, processMinutes: 75, startedAt: ago(22), endedAt: ago(20),
+    pressurePsi: 15, processMinutes, startedAt: ago(22), endedAt: ago(20),
   })
   expect(res.status, JSON.stringify(res.body)).toBe(201)
   return res.body
@@ -76,6 +76,12 @@ async function freshPlan() {
   const res = await clients.owner.post(hh('/plans'), { name: 'Pintos for the matrix', request: planRequest() })
   expect(res.status).toBe(201)
   return res.body.plan.id as string
+}
+/** A saved plan whose Canning day has started. */
+async function freshDay() {
+  const planId = await freshPlan()
+  expect((await clients.owner.post(hh(`/plans/${planId}/day`))).status).toBe(200)
+  return planId
 }
 async function freshCanner() {
   const res = await clients.owner.post(hh('/canners'), { name: 'Spare canner', innerDiameterMm: 300, usableHeightMm: 220, rackThicknessMm: 6, gaugeType: 'weighted', maxLayers: 1, waterDepthMm: 76 })
@@ -169,6 +175,10 @@ const expectations: Record<string, Expectation> = {
   'POST /api/households/:id/plans': { access: 'canner', call: () => ({ path: hh('/plans'), body: { name: 'Another plan', request: planRequest() } }) },
   'POST /api/households/:id/plans/preview': { access: 'helper', call: () => ({ path: hh('/plans/preview'), body: planRequest() }) },
   'GET /api/households/:id/plans/:planId': { access: 'helper', call: () => ({ path: hh(`/plans/${ids.plan}`) }) },
+  'GET /api/households/:id/plans/:planId/day': { access: 'helper', call: () => ({ path: hh(`/plans/${ids.plan}/day`) }) },
+  'POST /api/households/:id/plans/:planId/day': { access: 'helper', call: async () => ({ path: hh(`/plans/${await freshPlan()}/day`) }) },
+  'POST /api/households/:id/plans/:planId/day/events': { access: 'helper', call: async () => ({ path: hh(`/plans/${await freshDay()}/day/events`), body: { clientId: crypto.randomUUID(), target: 'load:1', kind: 'start-heat' } }) },
+  'POST /api/households/:id/loads/:loadId/decision': { access: 'helper', call: async () => ({ path: hh(`/loads/${(await freshLoad(60)).id}/decision`), body: { action: 'refrigerate' } }) },
   'PATCH /api/households/:id/plans/:planId': { access: 'canner', call: () => ({ path: hh(`/plans/${ids.plan}`), body: { name: 'Pintos for the matrix' } }) },
   'DELETE /api/households/:id/plans/:planId': { access: 'canner', call: async () => ({ path: hh(`/plans/${await freshPlan()}`) }) },
   'POST /api/households/:id/plans/:planId/copy': { access: 'canner', call: () => ({ path: hh(`/plans/${ids.plan}/copy`) }) },

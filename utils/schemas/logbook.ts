@@ -82,8 +82,10 @@ export const LoadUpdateSchema = z.object({
   startedAt: instant('started'),
   endedAt: instant('came out'),
   notes: NOTES,
+  /** The canner confirms a load the Canning day logged. */
+  confirmed: z.literal(true, { errorMap: () => ({ message: 'Send confirmed: true to confirm the load.' }) }),
 }).partial().superRefine((body, ctx) => {
-  if (Object.keys(body).length === 0) ctx.addIssue({ code: z.ZodIssueCode.custom, path: [], message: 'Send the run (pressure, minutes, start and end) or the notes.' })
+  if (Object.keys(body).length === 0) ctx.addIssue({ code: z.ZodIssueCode.custom, path: [], message: 'Send the run (pressure, minutes, start and end), the notes, or confirmed.' })
   checkTimes(body, ctx)
 })
 export type LoadUpdateInput = z.infer<typeof LoadUpdateSchema>

@@ -39,6 +39,15 @@ export const canningLoads = pgTable('canning_loads', {
   requiredSource: text('required_source'),
   startedAt: timestamp('started_at', { withTimezone: true }),
   endedAt: timestamp('ended_at', { withTimezone: true }),
+  /** Recorded by the Canning day as it happened (null for a load logged by hand). */
+  ventStartedAt: timestamp('vent_started_at', { withTimezone: true }),
+  pressureReachedAt: timestamp('pressure_reached_at', { withTimezone: true }),
+  processStartedAt: timestamp('process_started_at', { withTimezone: true }),
+  processEndedAt: timestamp('process_ended_at', { withTimezone: true }),
+  pressureDrops: jsonb('pressure_drops').$type<string[]>().notNull().default([]),
+  /** A load the Canning day wrote waits for the canner to confirm it; one logged by hand is confirmed. */
+  confirmedAt: timestamp('confirmed_at', { withTimezone: true }),
+  confirmedBy: uuid('confirmed_by').references(() => users.id, { onDelete: 'set null' }),
   /** A pending reprocessing load must start before this. */
   deadlineAt: timestamp('deadline_at', { withTimezone: true }),
   shortfall: jsonb('shortfall').$type<LoadShortfall | null>(),
