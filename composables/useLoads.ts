@@ -1,6 +1,7 @@
 import type { ApiAnswer } from '~/utils/api'
 import { dataKeys } from '~/utils/dataKeys'
 import type { LoadCreateInput, LoadListQuery } from '~/utils/schemas/logbook'
+import type { UnsealedAction } from '~/utils/vocabulary'
 
 export type LoadPage = ApiAnswer<'/api/households/:id/loads'>
 export type LoadRow = LoadPage['rows'][number]
@@ -18,7 +19,7 @@ export function useLoads(query: Ref<Partial<Record<keyof LoadListQuery, string |
   return { ...page, create: useLogLoad().create }
 }
 
-/** Logging a load, for a page that does not show the Logbook (no list is fetched). */
+/** Logging a load, confirming one the Canning day logged, deciding an under-processed one; no list is fetched. */
 export function useLogLoad() {
   const id = useAuth().activeId
   async function create(body: LoadCreateInput) {
@@ -26,5 +27,17 @@ export function useLogLoad() {
     await refreshNuxtData(afterLoadKeys(id.value))
     return load
   }
-  return { create }
+  /** The canner confirms a load the Canning day logged. */
+  async function confirm(loadId: string) {
+    // A bare string: the template type also matches loads/export.csv, which only answers GET.
+    const url: string = `/api/households/${id.value}/loads/${loadId}`
+    await $fetch(url, { method: 'PATCH', body: { confirmed: true } })
+    await refreshNuxtData(afterLoadKeys(id.value))
+  }
+  /** An under-processed load's jars: refrigerate or reprocess, decided at once. */
+  async function decide(loadId: string, action: UnsealedAction) {
+    await $fetch(`/api/households/${id.value}/loads/${loadId}/decision`, { method: 'POST', body: { action } })
+    await refreshNuxtData(afterLoadKeys(id.value))
+  }
+  return { create, confirm, decide }
 }

@@ -97,3 +97,8 @@ export function formatWallClock(iso: string, withDay = false): string {
   const time = wall.toLocaleString('en-US', { hour: 'numeric', minute: '2-digit', timeZone: 'UTC' })
   return withDay ? `${time} on ${wall.toLocaleString('en-US', { weekday: 'long', timeZone: 'UTC' })}` : time
 }
+
+/** A plan's step time as an instant: its own offset when it has one, else wall-clock time in `zone`. */
+export function wallToInstant(iso: string, zone: string): Date {
+  return /(?:Z|[+-]\d{2}:\d{2})$/.test(iso) ? new Date(iso) : fromZonedTime(iso.slice(0, 19), zone)
+}

@@ -19,8 +19,12 @@ export async function pantryBoard(db: Database, householdId: string) {
     listShelf(db, householdId, zone),
     loadsAwaitingCheck(db, householdId),
     sealRates(db, householdId),
-    db.select({ id: tables.plans.id, name: tables.plans.name, status: tables.plans.status, summary: tables.plans.summary, updatedAt: tables.plans.updatedAt })
+    db.select({
+      id: tables.plans.id, name: tables.plans.name, status: tables.plans.status, summary: tables.plans.summary, updatedAt: tables.plans.updatedAt,
+      request: tables.plans.request, dayStartedAt: tables.canningDays.startedAt,
+    })
       .from(tables.plans)
+      .leftJoin(tables.canningDays, eq(tables.canningDays.planId, tables.plans.id))
       .where(and(eq(tables.plans.householdId, householdId), inArray(tables.plans.status, openPlanStatuses)))
       .orderBy(desc(tables.plans.updatedAt)),
     db.select({ shelvedAt: tables.shelfLots.shelvedAt, jarsIn: tables.shelfLots.jarsIn })
@@ -42,7 +46,8 @@ export async function pantryBoard(db: Database, householdId: string) {
     shelf: { totalJars: shelf.totalJars, byProduct: shelf.byProduct },
     sealChecksDue: checks.due,
     reprocessing: checks.reprocessing,
-    plansInProgress: plans,
+    // The Canning day is one tap away on the day itself: once started, or when the plan starts today.
+    plansInProgress: plans.map(({ request, dayStartedAt, ...p }) => ({ ...p, canningDay: dayStartedAt !== null || request.startAt?.slice(0, 10) === shelf.today })),
     pastBestBy: shelf.lots.filter(l => l.bestByStatus === 'past'),
     nearBestBy: shelf.lots.filter(l => l.bestByStatus === 'near'),
     fridge: shelf.fridge,

@@ -240,7 +240,8 @@ function applyTask(snapshot: DaySnapshot, state: DayState, event: DayEvent): voi
 
 /** The state after one more event; refuses (DayRefusal) one that does not fit the sequence. */
 export function applyEvent(snapshot: DaySnapshot, state: DayState, event: DayEvent): DayState {
-  const next: DayState = structuredClone(state)
+  // Plain data only (a page's reactive copy cannot be structured-cloned).
+  const next: DayState = JSON.parse(JSON.stringify(state))
   if (event.target.startsWith('load:')) applyLoad(snapshot, next, event)
   else applyTask(snapshot, next, event)
   return next

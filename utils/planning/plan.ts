@@ -101,7 +101,13 @@ export function planBatch(
     contents: load.contents.map(c => ({ ...c, label: contentLabel(planned[c.lineIndex]!.recipe, c.jars, catalogue) })),
   }))
   const layouts = [...new Set(loads.map(l => `${l.cannerId}|${l.jarSizeId}`))].map(key => fits.get(key)!)
-  const recipesOfDay = [...new Map(planned.map(p => [p.recipe.id, { id: p.recipe.id, name: p.recipe.name, prep: p.recipe.prep }])).values()]
+  // "pinto beans (Dried beans or peas, hot pack)": the bean first, as it is soaked and boiled.
+  const prepName = (recipe: Recipe) => {
+    const bean = catalogue.ingredients.find(g => g.id === recipe.ingredientId)?.name
+    const base = recipe.name.split(' — ')[0]!
+    return bean ? `${bean.toLowerCase()} (${base})` : base
+  }
+  const recipesOfDay = [...new Map(planned.map(p => [p.recipe.id, { id: p.recipe.id, name: prepName(p.recipe), prep: p.recipe.prep }])).values()]
   const schedule = buildSchedule(loads, start, steps, recipesOfDay, request.soak)
 
   const ingredientOf = (l: LineResult): string => planned[l.lineIndex]!.recipe.ingredientId

@@ -185,7 +185,7 @@ function prepSteps(recipe: ScheduleRecipe, soak: SoakMethod): Array<{ step: Prep
       out.push({ step: 'stand', label: 'Take off the heat, cover and let stand 1 hour, then drain', minutes: SOAK_MINUTES.quickStand })
     }
   }
-  if (prep?.cook) out.push({ step: 'cook', label: `${recipe.name}: ${prep.cook.label}`, minutes: prep.cook.minutes })
+  if (prep?.cook) out.push({ step: 'cook', label: `${recipe.name.charAt(0).toUpperCase()}${recipe.name.slice(1)}: ${prep.cook.label}`, minutes: prep.cook.minutes })
   else if (!prep || prep.soak === 'none') out.push({ step: 'rinse', label: `Sort and rinse the ${recipe.name}`, minutes: RINSE_MINUTES })
   return out
 }
