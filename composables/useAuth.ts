@@ -57,7 +57,15 @@ export function useAuth() {
     await refreshNuxtData()
   }
 
+  /** What the service worker and the Canning day kept for offline use: never left for the next person. */
+  async function forgetOnThisDevice() {
+    if (!import.meta.client) return
+    if ('caches' in window) await Promise.all(['shelfstead-api', 'shelfstead-pages'].map(name => caches.delete(name)))
+    for (const key of Object.keys(localStorage)) if (key.startsWith('shelfstead-day-queue:')) localStorage.removeItem(key)
+  }
+
   async function signedOut(stay = false) {
+    await forgetOnThisDevice()
     await session.clear()
     me.value = null
     clearNuxtData()

@@ -36,7 +36,10 @@ export default defineNitroPlugin((nitroApp) => {
       'cross-origin-opener-policy': 'same-origin',
       'permissions-policy': 'camera=(self), microphone=(), geolocation=()',
     })
-    if (!import.meta.dev) setResponseHeader(event, 'content-security-policy', `default-src 'none'; frame-ancestors 'none'`)
+    if (import.meta.dev) return
+    // The service worker runs under its own script's policy: it fetches and caches the app's own files.
+    const worker = /^\/(sw|workbox-[\w-]+)\.js$/.test(event.path)
+    setResponseHeader(event, 'content-security-policy', worker ? `default-src 'self'; script-src 'self'; connect-src 'self'` : `default-src 'none'; frame-ancestors 'none'`)
   })
   nitroApp.hooks.hook('render:response', (response) => {
     if (import.meta.dev || typeof response.body !== 'string') return

@@ -175,6 +175,7 @@ const expectations: Record<string, Expectation> = {
   'POST /api/households/:id/plans': { access: 'canner', call: () => ({ path: hh('/plans'), body: { name: 'Another plan', request: planRequest() } }) },
   'POST /api/households/:id/plans/preview': { access: 'helper', call: () => ({ path: hh('/plans/preview'), body: planRequest() }) },
   'GET /api/households/:id/plans/:planId': { access: 'helper', call: () => ({ path: hh(`/plans/${ids.plan}`) }) },
+  'GET /api/households/:id/plans/:planId/calendar.ics': { access: 'helper', call: () => ({ path: hh(`/plans/${ids.plan}/calendar.ics`) }) },
   'GET /api/households/:id/plans/:planId/day': { access: 'helper', call: () => ({ path: hh(`/plans/${ids.plan}/day`) }) },
   'POST /api/households/:id/plans/:planId/day': { access: 'helper', call: async () => ({ path: hh(`/plans/${await freshPlan()}/day`) }) },
   'POST /api/households/:id/plans/:planId/day/events': { access: 'helper', call: async () => ({ path: hh(`/plans/${await freshDay()}/day/events`), body: { clientId: crypto.randomUUID(), target: 'load:1', kind: 'start-heat' } }) },

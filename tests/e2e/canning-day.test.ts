@@ -179,6 +179,27 @@ describe('the Canning day', () => {
     expectField(future, 'at', /later than now/)
   })
 
+  it('exports the day as iCalendar (RFC 5545): every step, and each load\'s seal check 12–24 h after it came out', async () => {
+    const res = await fetch(`${server.url}${H.api(`/plans/${planId}/calendar.ics`)}`, { headers: { cookie: H.owner.cookieHeader } })
+    expect(res.status).toBe(200)
+    expect(res.headers.get('content-type')).toMatch(/^text\/calendar/)
+    const text = await res.text()
+    expect(text.startsWith('BEGIN:VCALENDAR\r\nVERSION:2.0\r\n')).toBe(true)
+    const events = text.split('BEGIN:VEVENT').slice(1)
+    const { snapshot, state } = (await day()).body
+    // One event per planned load step and kitchen task, plus one seal check per load.
+    expect(events).toHaveLength(snapshot.planned.length + snapshot.tasks.length + snapshot.loads.length)
+    const seal = events.find(e => e.includes('SUMMARY:Check the seals of load 1'))!
+    const stamp = (field: string) => {
+      const m = new RegExp(`${field}:(\\d{4})(\\d{2})(\\d{2})T(\\d{2})(\\d{2})(\\d{2})Z`).exec(seal)!
+      return Date.UTC(+m[1]!, +m[2]! - 1, +m[3]!, +m[4]!, +m[5]!, +m[6]!)
+    }
+    // USDA Complete Guide, "Cooling jars": check the seals 12 to 24 hours after the load came out.
+    const out = Date.parse(state.loads.find((l: { index: number }) => l.index === 1).outAt)
+    expect(stamp('DTSTART') - Math.floor(out / 1000) * 1000).toBe(12 * 60 * MIN)
+    expect(stamp('DTEND') - stamp('DTSTART')).toBe(12 * 60 * MIN)
+  })
+
   it('shows nothing of the day to another household', async () => {
     expect((await stranger.get(H.api(`/plans/${planId}/day`))).status).toBe(404)
     expect((await stranger.post(H.api(`/plans/${planId}/day/events`), { clientId: crypto.randomUUID(), target: 'load:1', kind: 'undo' })).status).toBe(404)

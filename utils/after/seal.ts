@@ -4,8 +4,8 @@
  */
 import type { SealCheckStatus } from '../vocabulary'
 
-const SEAL_CHECK_AFTER_HOURS = 12
-const SEAL_CHECK_BY_HOURS = 24
+export const SEAL_CHECK_AFTER_HOURS = 12
+export const SEAL_CHECK_BY_HOURS = 24
 export const REPROCESS_WITHIN_HOURS = 24
 
 const HOUR_MS = 3_600_000
