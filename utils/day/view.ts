@@ -32,10 +32,10 @@ const zeroWords = (gauge: GaugeType) => (gauge === 'dial' ? 'the dial reads zero
 export function loadView(load: DayLoad, state: LoadState): LoadView {
   const psi = load.pressurePsi
   const gauge = load.gaugeType
-  const reached = gauge === 'dial' ? `The dial reads ${psi} psi: start timing` : `The ${psi} lb weight jiggles as the manual says: start timing`
+  const reached = gauge === 'dial' ? `The dial reads ${psi} psi: start timing` : `The ${psi} psi weight jiggles as the manual says: start timing`
   const views: Record<LoadPhase, Omit<LoadView, 'title'>> = {
     waiting: {
-      doing: 'Set the filled jars on the rack in 2–3 inches of hot water (or as the manual says), lock the lid, leave the vent open and turn on the heat.',
+      doing: 'Set the filled jars on the rack in hot water as deep as the manual says (usually 5–8 cm, 2–3 in), lock the lid, leave the vent open and turn on the heat.',
       caution: null,
       next: 'Wait for a steady column of steam from the vent.',
       actions: [{ kind: 'start-heat', label: `Heat on for load ${load.index}`, tone: 'primary' }],
@@ -49,11 +49,11 @@ export function loadView(load: DayLoad, state: LoadState): LoadView {
     vent: {
       doing: 'Let steam flow from the open vent for the full 10 minutes, so no air is left in the canner.',
       caution: 'Air left in the canner lowers the temperature at the same pressure.',
-      next: gauge === 'dial' ? 'Close the petcock and bring it up to pressure.' : `Put the ${psi} lb weight on and bring it up to pressure.`,
+      next: gauge === 'dial' ? 'Close the petcock and bring it up to pressure.' : `Put the ${psi} psi weight on and bring it up to pressure.`,
       actions: [{ kind: 'close-vent', label: gauge === 'dial' ? 'Vent done: petcock closed' : 'Vent done: weight on', tone: 'primary', whenTimerDone: true }],
     },
     pressurise: {
-      doing: gauge === 'dial' ? `Coming up to pressure. Start timing only when the dial reads ${psi} psi.` : `Coming up to pressure. Start timing only when the ${psi} lb weight jiggles or rocks as the manual says.`,
+      doing: gauge === 'dial' ? `Coming up to pressure. Start timing only when the dial reads ${psi} psi.` : `Coming up to pressure. Start timing only when the ${psi} psi weight jiggles or rocks as the manual says.`,
       caution: state.drops.length ? `The pressure dropped: the whole ${load.processMinutes} minutes are timed again from the moment it is back.` : null,
       next: `Process ${load.processMinutes} minutes at ${psi} psi.`,
       actions: [{ kind: 'pressure-reached', label: reached, tone: 'primary' }],
@@ -81,7 +81,7 @@ export function loadView(load: DayLoad, state: LoadState): LoadView {
       actions: [{ kind: 'open', label: '10 minutes done: open the lid', tone: 'primary', whenTimerDone: true }],
     },
     unload: {
-      doing: 'Lift the jars out upright onto a towel, 1 inch apart, away from drafts. Do not tighten the bands.',
+      doing: 'Lift the jars out upright onto a towel, 2.5 cm (1 in) apart, away from drafts. Do not tighten the bands.',
       caution: null,
       next: 'Leave them undisturbed 12–24 hours, then check the seals.',
       actions: [{ kind: 'out', label: 'Jars are out', tone: 'primary' }],

@@ -57,7 +57,7 @@ export function loadStepLabel(step: LoadStepName, gauge: GaugeType, psi: number)
     case 'vent': return 'Vent steam 10 minutes, then close the vent'
     case 'pressurise': return gauge === 'dial'
       ? `Bring up until the dial reads ${psi} psi`
-      : `Put the ${psi} lb weight on and bring up until it jiggles or rocks as the manual says`
+      : `Put the ${psi} psi weight on and bring up until it jiggles or rocks as the manual says`
     case 'process': return `Process at ${psi} psi`
     case 'cool': return gauge === 'dial'
       ? 'Turn off the heat; cool naturally until the dial reads zero'

@@ -54,7 +54,7 @@ describe('several loads', () => {
     const dial = buildSchedule([load(1, 'a', 75, 30, 'dial')], start, DEFAULT_STEP_MINUTES).steps
     const weighted = buildSchedule([load(1, 'a', 75, 30, 'weighted')], start, DEFAULT_STEP_MINUTES).steps
     expect(dial.find(x => x.step === 'pressurise')!.label).toMatch(/dial reads 11 psi/)
-    expect(weighted.find(x => x.step === 'pressurise')!.label).toMatch(/10 lb weight/)
+    expect(weighted.find(x => x.step === 'pressurise')!.label).toMatch(/10 psi weight/)
     expect(dial.find(x => x.step === 'wait')!.label).toMatch(/petcock/)
     expect(weighted.find(x => x.step === 'cool')!.label).toMatch(/never|naturally/)
   })
