@@ -6,6 +6,14 @@ export function sizeName(jarSizes: ReadonlyArray<{ sizeKey: string, name: string
   return jar ? jar.name.split(',')[0]! : sizeKey
 }
 
+/** The jar size families of the catalogue, smallest first, with their largest capacity and name. */
+export function jarSizeFamilies(jarSizes: ReadonlyArray<{ sizeKey: string, name: string, capacityMl: number }>) {
+  const capacity = (key: string) => Math.max(0, ...jarSizes.filter(j => j.sizeKey === key).map(j => j.capacityMl))
+  return [...new Set(jarSizes.map(j => j.sizeKey))]
+    .map(key => ({ key, name: sizeName(jarSizes, key), capacityMl: capacity(key) }))
+    .sort((a, b) => a.capacityMl - b.capacityMl)
+}
+
 /** Money entered and shown in currency units; stored in cents. */
 export const centsToUnits = (cents: number): number => cents / 100
 export const unitsToCents = (units: number): number => Math.round(units * 100)

@@ -15,9 +15,10 @@ import { computePlan, requirePlan } from './plans'
 const H = 3_600_000
 
 export async function planCalendar(db: Database, householdId: string, planId: string, zone: string): Promise<string> {
-  const plan = await requirePlan(db, householdId, planId)
   const day = await readDay(db, householdId, planId)
-  const result = day.started ? null : await computePlan(db, householdId, plan.request)
+  const planName = day.planName
+  // Before the day starts, its times come from the plan as computed now.
+  const result = day.started ? null : await computePlan(db, householdId, (await requirePlan(db, householdId, planId)).request)
   const at = (wall: string) => wallToInstant(wall, zone).getTime()
   const uid = (what: string) => `${planId}-${what}@shelfstead`
   const events: EventAttributes[] = []
@@ -31,7 +32,7 @@ export async function planCalendar(db: Database, householdId: string, planId: st
       start: at(s.start), startInputType: 'utc', startOutputType: 'utc',
       end: at(s.end), endInputType: 'utc', endOutputType: 'utc',
       title: s.load && !s.kitchen ? `Load ${s.load}: ${s.label}` : s.label,
-      description: `${plan.name}. Follow the published process and your canner's manual.`,
+      description: `${planName}. Follow the published process and your canner's manual.`,
       categories: ['Canning'],
     })
   }
@@ -46,11 +47,11 @@ export async function planCalendar(db: Database, householdId: string, planId: st
       start: outMs + SEAL_CHECK_AFTER_HOURS * H, startInputType: 'utc', startOutputType: 'utc',
       end: outMs + SEAL_CHECK_BY_HOURS * H, endInputType: 'utc', endOutputType: 'utc',
       title: `Check the seals of load ${index}`,
-      description: `${plan.name}: test each lid 12–24 hours after the load came out (USDA Complete Guide, "Cooling jars"). Jars that did not seal: refrigerate, or reprocess within 24 hours.`,
+      description: `${planName}: test each lid 12–24 hours after the load came out (USDA Complete Guide, "Cooling jars"). Jars that did not seal: refrigerate, or reprocess within 24 hours.`,
       categories: ['Canning'],
     })
   }
-  const { error, value } = createEvents(events, { productId: 'Shelfstead', calName: plan.name })
+  const { error, value } = createEvents(events, { productId: 'Shelfstead', calName: planName })
   if (error || !value) throw error ?? new Error('The calendar could not be written.')
   return value
 }

@@ -67,7 +67,6 @@ export async function readDay(db: Db, householdId: string, planId: string) {
     })),
   }
 }
-export type DayAnswer = Awaited<ReturnType<typeof readDay>>
 
 /** Freeze the plan as computed now into the day; starting a day already started changes nothing. */
 export async function startDay(db: Database, householdId: string, userId: string, planId: string) {

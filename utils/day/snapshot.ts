@@ -4,7 +4,7 @@ import type { PlanResult } from '../planning/results'
 import type { DaySnapshot } from './state'
 
 /** A kitchen task's key: "fill:2" for a load's jars, "<recipe>:<step>" for a recipe's preparation. */
-export const taskKey = (step: { load: number, step: string, recipeId?: string }) =>
+const taskKey = (step: { load: number, step: string, recipeId?: string }) =>
   step.step === 'fill' ? `fill:${step.load}` : `${step.recipeId ?? 'prep'}:${step.step}`
 
 export function daySnapshot(planName: string, result: Pick<PlanResult, 'loads' | 'schedule'>, cannerNames: Readonly<Record<string, string>>): DaySnapshot {

@@ -13,7 +13,7 @@
  * ends a process short, and the load is flagged. A canner holds one load: the next load on it
  * starts once the jars of the one before are out.
  */
-import { LOAD_STEPS, type LoadStepName } from '../planning/schedule'
+import type { LoadStepName } from '../planning/schedule'
 import type { GaugeType } from '../planning/types'
 import type { DayEventKind } from '../vocabulary'
 
@@ -273,6 +273,3 @@ export function checkUndo(state: DayState, events: readonly DayEvent[], target: 
   if (event.kind === 'out') throw new DayRefusal('The jars are out and the load is in the Logbook; correct it there.')
   return event
 }
-
-/** The load steps in order, for timelines. */
-export const LOAD_PHASES: readonly LoadPhase[] = ['waiting', ...LOAD_STEPS, 'out']

@@ -4,6 +4,7 @@
  * stays a thin view and the wording is tested.
  */
 import type { GaugeType } from '../planning/types'
+import { formatWallClock } from '../time'
 import type { DayEventKind } from '../vocabulary'
 import type { DayLoad, DayTask, LoadPhase, LoadState, TaskState } from './state'
 
@@ -104,6 +105,24 @@ export function taskActions(task: DayTask, state: TaskState): DayAction[] {
     case 'paused': return [{ kind: 'task-resume', label: 'Resume', tone: 'primary' }, { kind: 'task-done', label: 'Done', tone: 'ghost' }]
     case 'done': return []
   }
+}
+
+/**
+ * Milliseconds left of a timer of `minutes` ending at `endsAt`, as of `now` (the server's time as
+ * this device reckons it). Never more than the timer's minutes: the reckoning can trail the
+ * server's clock by the network's delay, and "10:01 left of 10 min" would be wrong.
+ */
+export function msLeft(endsAt: string, minutes: number, now: number): number {
+  return Math.min(Date.parse(endsAt) - now, minutes * 60_000)
+}
+
+/**
+ * What to do first, from the day's first preparation step: "Start soaking by 7:15 PM on
+ * Friday", with the weekday when it falls before the canning day.
+ */
+export function firstThingText(step: { start: string, isSoak: boolean, isQuick: boolean }, canningStart: string): { what: string, by: string } {
+  const what = step.isSoak ? 'Start soaking' : step.isQuick ? 'Start the quick soak' : 'Start preparing'
+  return { what, by: formatWallClock(step.start, step.start.slice(0, 10) !== canningStart.slice(0, 10)) }
 }
 
 /** "1:05:09", "7:32", "0:04": a countdown or time elapsed, from milliseconds. */

@@ -26,14 +26,10 @@ export { type Point, type UnitPacking, type SearchOptions } from './packing-sear
 export { buildLoads, spreadEvenly, type CannerFit, type Load, type LoadContent, type LoadLine } from './loads'
 export {
   DEFAULT_STEP_MINUTES,
-  FILL_MINUTES,
   KITCHEN_LANE,
   LOAD_STEPS,
-  RINSE_MINUTES,
-  SOAK_MINUTES,
   buildSchedule,
   coolDownMinutes,
-  loadStepLabel,
   parseStart,
   type DayStart,
   type LoadStepName,
