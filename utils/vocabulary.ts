@@ -43,6 +43,21 @@ export type FillBasis = (typeof fillBases)[number]
 export const priceKinds = ['ingredient', 'salt', 'lid', 'jar', 'vinegar'] as const
 export type PriceKind = (typeof priceKinds)[number]
 
+/** Currencies a household can keep its prices in (ISO 4217; each has 2 minor digits, so prices stay in cents). */
+export const currencies = ['USD', 'CAD', 'EUR', 'GBP', 'AUD', 'NZD', 'CHF'] as const
+export type Currency = (typeof currencies)[number]
+
+/**
+ * How the household measures the store can it compares with: 'net', the net weight printed on
+ * the can (grams), or 'drained', the drained beans it holds (mL).
+ */
+export const storeCanBases = ['net', 'drained'] as const
+export type StoreCanBasis = (typeof storeCanBases)[number]
+
+/** A Market list item marked off: 'bought' (got it at the store) or 'at-home' (already had it: left out of the total). */
+export const marketCheckStates = ['bought', 'at-home'] as const
+export type MarketCheckState = (typeof marketCheckStates)[number]
+
 export const planStatuses = ['planned', 'in-progress', 'done'] as const
 export type PlanStatus = (typeof planStatuses)[number]
 /** Plans still being worked through, shown on the Pantry board. */
@@ -62,6 +77,9 @@ export const bestByStatuses = ['past', 'near', 'ok'] as const
 export type BestByStatus = (typeof bestByStatuses)[number]
 
 export const shelfSources = ['seal-check', 'import'] as const
+/** A move off the Shelf: jars eaten ('taken'), or a correction of the count that is not use (a lot recorded wrong, or removed). */
+export const shelfMoveKinds = ['taken', 'correction'] as const
+export type ShelfMoveKind = (typeof shelfMoveKinds)[number]
 export const reminderKinds = ['seal-check'] as const
 
 export const imageTypes = ['image/jpeg', 'image/png', 'image/webp'] as const
@@ -69,7 +87,7 @@ export type ImageType = (typeof imageTypes)[number]
 
 /** What the household's activity record notes. */
 export const activityKinds = [
-  'settings', 'member', 'invitation', 'canner', 'price', 'jar-stock', 'recipe',
+  'settings', 'member', 'invitation', 'canner', 'price', 'jar-stock', 'dry-goods', 'recipe',
   'plan', 'market', 'load', 'seal-check', 'shelf', 'photo',
 ] as const
 export type ActivityKind = (typeof activityKinds)[number]

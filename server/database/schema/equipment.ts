@@ -1,4 +1,4 @@
-/** A household's canners, prices and empty-jar stock. */
+/** A household's canners, prices, empty-jar stock and dry goods on hand. */
 import { date, doublePrecision, index, integer, pgTable, primaryKey, text, uuid } from 'drizzle-orm/pg-core'
 import { gaugeTypes, jarMouths, priceKinds } from '../../../utils/vocabulary'
 import { timestamps } from './columns'
@@ -41,3 +41,11 @@ export const jarStock = pgTable('jar_stock', {
   count: integer('count').notNull().default(0),
   ...timestamps,
 }, t => [primaryKey({ columns: [t.householdId, t.jarSizeId] })])
+
+/** Dry goods the household has in the pantry, by ingredient: the Market list buys only the rest. */
+export const dryGoodsStock = pgTable('dry_goods_stock', {
+  householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
+  ingredientId: text('ingredient_id').notNull().references(() => ingredients.id),
+  grams: doublePrecision('grams').notNull().default(0),
+  ...timestamps,
+}, t => [primaryKey({ columns: [t.householdId, t.ingredientId] })])

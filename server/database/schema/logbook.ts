@@ -71,6 +71,9 @@ export const loadLines = pgTable('load_lines', {
   product: text('product').notNull(),
   jarSizeId: text('jar_size_id').notNull().references(() => jarSizes.id),
   jars: integer('jars').notNull(),
+  /** What filling these jars took out of the household's stock, so a correction or a delete gives back exactly that. */
+  jarsFromStock: integer('jars_from_stock').notNull().default(0),
+  dryGramsFromStock: doublePrecision('dry_grams_from_stock').notNull().default(0),
   sealed: integer('sealed'),
   unsealed: integer('unsealed'),
   unsealedAction: text('unsealed_action', { enum: unsealedActions }),

@@ -1,9 +1,9 @@
 /** People, households and who belongs to which. */
 import { sql } from 'drizzle-orm'
-import { boolean, index, integer, pgTable, primaryKey, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core'
+import { boolean, doublePrecision, index, integer, pgTable, primaryKey, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core'
 import { DEFAULT_BEST_BY_MONTHS } from '../../../utils/defaults'
 import { DEFAULT_COOL_DOWN } from '../../../utils/planning/schedule'
-import { roles, unitSystems } from '../../../utils/vocabulary'
+import { currencies, roles, storeCanBases, unitSystems } from '../../../utils/vocabulary'
 import { timestamps } from './columns'
 
 export const users = pgTable('users', {
@@ -23,6 +23,11 @@ export const households = pgTable('households', {
   unitSystem: text('unit_system', { enum: unitSystems }).notNull().default('us'),
   /** What the household pays for one store-bought can of cooked beans, in cents. */
   storeCanPriceCents: integer('store_can_price_cents').notNull().default(129),
+  /** The store can's size: net grams ('net') or drained mL ('drained'); a 15-oz can by default. */
+  storeCanBasis: text('store_can_basis', { enum: storeCanBases }).notNull().default('net'),
+  storeCanAmount: doublePrecision('store_can_amount').notNull().default(425.243),
+  /** ISO 4217 currency the household's prices are in. */
+  currency: text('currency', { enum: currencies }).notNull().default('USD'),
   /** How many canning seasons a jar is expected to serve; jar cost is spread over them. */
   jarUses: integer('jar_uses').notNull().default(10),
   coolDownPintMinutes: integer('cool_down_pint_minutes').notNull().default(DEFAULT_COOL_DOWN.pint),

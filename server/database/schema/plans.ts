@@ -1,7 +1,7 @@
 /** Saved batch plans and their Market list check-offs. */
 import { index, jsonb, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core'
 import type { PlanRequestBody } from '../../../utils/schemas/plan'
-import { planStatuses } from '../../../utils/vocabulary'
+import { marketCheckStates, planStatuses } from '../../../utils/vocabulary'
 import { timestamps } from './columns'
 import { users, households } from './people'
 
@@ -23,6 +23,7 @@ export const marketChecks = pgTable('market_checks', {
   planId: uuid('plan_id').notNull().references(() => plans.id, { onDelete: 'cascade' }),
   householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
   itemKey: text('item_key').notNull(),
+  state: text('state', { enum: marketCheckStates }).notNull().default('bought'),
   checkedBy: uuid('checked_by').references(() => users.id, { onDelete: 'set null' }),
   checkedAt: timestamp('checked_at', { withTimezone: true }).notNull().defaultNow(),
 }, t => [primaryKey({ columns: [t.planId, t.itemKey] })])

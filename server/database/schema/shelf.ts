@@ -1,6 +1,6 @@
 /** The Shelf: lots of sealed jars, every move on or off it, and unsealed jars sent to the refrigerator. */
 import { date, index, integer, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core'
-import { shelfSources } from '../../../utils/vocabulary'
+import { shelfMoveKinds, shelfSources } from '../../../utils/vocabulary'
 import { timestamps } from './columns'
 import { canningLoads, loadLines } from './logbook'
 import { users, households } from './people'
@@ -36,6 +36,10 @@ export const shelfMovements = pgTable('shelf_movements', {
   batchId: uuid('batch_id').notNull(),
   lotId: uuid('lot_id').notNull().references(() => shelfLots.id, { onDelete: 'cascade' }),
   jars: integer('jars').notNull(),
+  /** 'taken': eaten (counts as use on the Pantry board); 'correction': the count was wrong or the lot removed. */
+  kind: text('kind', { enum: shelfMoveKinds }).notNull().default('taken'),
+  /** Why a correction was made, in the household's words. */
+  reason: text('reason').notNull().default(''),
   /** Empty jars returned to the household's jar stock by this take-off. */
   jarsReturned: integer('jars_returned').notNull().default(0),
   movedAt: timestamp('moved_at', { withTimezone: true }).notNull(),
