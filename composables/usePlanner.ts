@@ -5,7 +5,7 @@ import type { PlanRequestBody } from '~/utils/schemas/plan'
  * the Recipe book, the jar catalogue, the beans, the household's canners, settings and
  * members, and the preview computation. `props` is what PlannerWorkspace takes.
  */
-export function usePlanner() {
+export function usePlanner(planId?: Ref<string | null | undefined>) {
   const { data: recipes } = useRecipes()
   const { data: jarSizes } = useJarSizes()
   const { data: ingredients } = useIngredients()
@@ -23,7 +23,7 @@ export function usePlanner() {
     members: members.value ?? [],
     household: household.value ?? null,
     units: units.value,
-    onPreview: (body: PlanRequestBody) => preview(body),
+    onPreview: (body: PlanRequestBody) => preview(body, planId?.value),
   }))
   return { recipes, jarSizes, ready, props }
 }

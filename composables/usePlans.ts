@@ -10,8 +10,9 @@ export function usePlans() {
   const { id, options } = useHouseholdRead(dataKeys.plans)
   const list = useFetch(() => `/api/households/${id.value}/plans` as const, options)
 
-  const preview = (body: PlanRequestBody) =>
-    $fetch(`/api/households/${id.value}/plans/preview`, { method: 'POST', body })
+  /** Compute a plan; for a change to a saved plan, with that plan's progress. */
+  const preview = (body: PlanRequestBody, planId?: string | null) =>
+    $fetch(`/api/households/${id.value}/plans/preview`, { method: 'POST', body, query: planId ? { planId } : {} })
 
   async function create(name: string, request: PlanRequestBody) {
     const { plan } = await $fetch(`/api/households/${id.value}/plans`, { method: 'POST', body: { name, request } })

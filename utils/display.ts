@@ -1,4 +1,16 @@
-/** Formatting shared by several screens: jar size names, money, recipe cautions, fill shares. */
+/** Formatting shared by several screens: jar size names, money, plurals, recipe cautions, fill shares. */
+import { countOf } from './planning/units'
+import type { ShelfCorrectionCause } from './vocabulary'
+
+/**
+ * "1 jar", "2 jars", "1,200 jars": a count and its noun, the form chosen by
+ * Intl.PluralRules('en-US') (the one rule, in utils/planning/units.ts `countOf`).
+ */
+export const plural = (n: number, one: string, other: string): string => countOf(n, one, other)
+
+const pluralRules = new Intl.PluralRules('en-US')
+/** The word alone, for a count shown apart from it: "jar" for 1, "jars" for 0 or 2. */
+export const pluralWord = (n: number, one: string, other: string): string => (pluralRules.select(n) === 'one' ? one : other)
 
 /** "Pint", "Half-pint": the size family's name from the jar catalogue ("Pint, regular mouth"). */
 export function sizeName(jarSizes: ReadonlyArray<{ sizeKey: string, name: string }> | null | undefined, sizeKey: string): string {
@@ -17,10 +29,30 @@ export function jarSizeFamilies(jarSizes: ReadonlyArray<{ sizeKey: string, name:
 /** Money entered and shown in currency units; stored in cents. */
 export const centsToUnits = (cents: number): number => cents / 100
 export const unitsToCents = (units: number): number => Math.round(units * 100)
-export const formatMoney = (cents: number): string =>
-  (cents / 100).toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 })
+const moneyFormats = new Map<string, Intl.NumberFormat>()
+/**
+ * "$13.96", "CA$13.96", "€13.96": cents in the household's currency through Intl.NumberFormat
+ * (every currency the household can choose has two minor digits). Read in US English, as the
+ * rest of the product is.
+ */
+export function formatMoney(cents: number, currency: string = 'USD'): string {
+  let format = moneyFormats.get(currency)
+  if (!format) {
+    format = new Intl.NumberFormat('en-US', { style: 'currency', currency })
+    moneyFormats.set(currency, format)
+  }
+  return format.format(cents / 100)
+}
 
 export const packStyleLabels = { dry: 'Dry pack (no soak)', hot: 'Hot pack', raw: 'Raw pack' } as const
+
+/** What happened to a lot whose count is corrected, as the correction form offers it. */
+export const shelfCorrectionCauseLabels: Record<ShelfCorrectionCause, string> = {
+  miscounted: 'Miscounted: the count was wrong',
+  mistake: 'Recorded by mistake: these jars were never filled',
+  broken: 'Broken or lost',
+  discarded: 'Thrown out; the emptied jars were washed and kept',
+}
 
 /** The caution text without its leading "Untested — your own risk." (shown as the title instead). */
 export function cautionBody(caution: string | undefined): string {

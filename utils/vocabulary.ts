@@ -80,6 +80,19 @@ export const shelfSources = ['seal-check', 'import'] as const
 /** A move off the Shelf: jars eaten ('taken'), or a correction of the count that is not use (a lot recorded wrong, or removed). */
 export const shelfMoveKinds = ['taken', 'correction'] as const
 export type ShelfMoveKind = (typeof shelfMoveKinds)[number]
+/**
+ * Why a lot's count is corrected: miscounted (the count was wrong, either way), recorded by
+ * mistake (the jars were never filled), broken or lost, or thrown out with the jars kept (the
+ * emptied jars go back to jar stock). None of them is use.
+ */
+export const shelfCorrectionCauses = ['miscounted', 'mistake', 'broken', 'discarded'] as const
+export type ShelfCorrectionCause = (typeof shelfCorrectionCauses)[number]
+/** Why an imported row added nothing: its lot is on the Shelf, or was eaten or removed since. */
+export const shelfImportSkips = ['on-shelf', 'gone'] as const
+export type ShelfImportSkip = (typeof shelfImportSkips)[number]
+/** Label stock: US letter 30-up (1 × 2⅝ in), A4 24-up (70 × 37 mm), or plain paper to cut. */
+export const labelLayouts = ['sheet-30', 'a4-24', 'plain'] as const
+export type LabelLayout = (typeof labelLayouts)[number]
 export const reminderKinds = ['seal-check'] as const
 
 export const imageTypes = ['image/jpeg', 'image/png', 'image/webp'] as const

@@ -1,5 +1,7 @@
-import { asc, eq, inArray, isNull, or } from 'drizzle-orm'
+import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm'
+import { jarsPerMonthByProduct } from '~~/utils/after'
 import type { Canner, Catalogue, HouseholdSettings, PriceItem, Recipe, RecipePrep } from '~~/utils/planning'
+import type { Currency } from '~~/utils/vocabulary'
 import { FUTURE_GAUGE_TEST } from '~~/utils/schemas/catalogue'
 import type { Database } from './database'
 
@@ -116,22 +118,50 @@ export async function householdTimeZone(db: Database, householdId: string): Prom
   return household.timeZone
 }
 
-export async function loadHouseholdSettings(db: Database, householdId: string): Promise<HouseholdSettings & { name: string, timeZone: string }> {
+export async function loadHouseholdSettings(db: Database, householdId: string): Promise<HouseholdSettings & { name: string, timeZone: string, currency: Currency }> {
   const [household] = await db.select().from(tables.households).where(eq(tables.households.id, householdId))
   if (!household) notFound('No such household.')
-  const [prices, stock] = await Promise.all([
+  const [prices, stock, dryGoods, eaten] = await Promise.all([
     db.select().from(tables.priceItems).where(eq(tables.priceItems.householdId, householdId)),
     db.select().from(tables.jarStock).where(eq(tables.jarStock.householdId, householdId)),
+    db.select().from(tables.dryGoodsStock).where(eq(tables.dryGoodsStock.householdId, householdId)),
+    jarsEatenByRecipe(db, householdId, household.timeZone),
   ])
   return {
     name: household.name,
     timeZone: household.timeZone,
+    currency: household.currency,
     altitudeFt: household.altitudeFt,
     unitSystem: household.unitSystem,
     storeCanPriceCents: household.storeCanPriceCents,
+    storeCan: { basis: household.storeCanBasis, amount: household.storeCanAmount },
     jarUses: household.jarUses,
     coolDownMinutes: { pint: household.coolDownPintMinutes, quart: household.coolDownQuartMinutes },
     jarsOwned: stock.map(s => ({ jarSizeId: s.jarSizeId, count: s.count })),
+    dryGoodsOnHand: dryGoods.filter(g => g.grams > 0).map(g => ({ ingredientId: g.ingredientId, grams: g.grams })),
+    jarsEatenPerMonth: eaten,
     prices: prices.map(toPriceItem).filter((p): p is PriceItem => p !== null),
   }
+}
+
+/**
+ * Jars taken off the Shelf as eaten (not corrections, not undone), as the Pantry board's
+ * "What you eat" reads them: every product's jars a month over the last 12 months.
+ */
+export async function jarsEatenRows(db: Database, householdId: string) {
+  return db.select({
+    movedAt: tables.shelfMovements.movedAt, jars: tables.shelfMovements.jars,
+    product: tables.shelfLots.product, recipeId: tables.shelfLots.recipeId, jarSizeId: tables.shelfLots.jarSizeId,
+  })
+    .from(tables.shelfMovements).innerJoin(tables.shelfLots, eq(tables.shelfLots.id, tables.shelfMovements.lotId))
+    .where(and(eq(tables.shelfMovements.householdId, householdId), isNull(tables.shelfMovements.undoneAt), eq(tables.shelfMovements.kind, 'taken')))
+}
+
+/** What the household eats, by recipe: jars a month summed over the recipe's products and jar sizes. */
+async function jarsEatenByRecipe(db: Database, householdId: string, zone: string) {
+  const rows = await jarsEatenRows(db, householdId)
+  const perProduct = jarsPerMonthByProduct(rows.map(m => ({ at: m.movedAt, jars: m.jars, key: `${m.product}|${m.jarSizeId}`, product: m.product, recipeId: m.recipeId, jarSizeId: m.jarSizeId })), serverNow(), zone)
+  const byRecipe = new Map<string, number>()
+  for (const p of perProduct) if (p.recipeId) byRecipe.set(p.recipeId, (byRecipe.get(p.recipeId) ?? 0) + p.jarsPerMonth)
+  return [...byRecipe].map(([recipeId, jarsPerMonth]) => ({ recipeId, jarsPerMonth }))
 }

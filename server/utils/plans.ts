@@ -1,5 +1,6 @@
-import { and, asc, eq, gt, inArray, isNull, or } from 'drizzle-orm'
-import { planBatch, PlanningRefusal, type PlanLineRequest, type PlanResult } from '~~/utils/planning'
+import { and, asc, eq, gt, inArray, isNotNull, isNull, or } from 'drizzle-orm'
+import { planBatch, PlanningRefusal, type PlanLineRequest, type PlanProgress, type PlanResult } from '~~/utils/planning'
+import type { Currency } from '~~/utils/vocabulary'
 import type { PlanLineBody, PlanRequestBody } from '~~/utils/schemas/plan'
 import { loadCanners, loadCatalogue, loadHouseholdSettings, toPlanningCanner } from './catalogue'
 import type { Database, Db } from './database'
@@ -16,11 +17,12 @@ function amountOf(line: PlanLineBody): PlanLineRequest['amount'] {
  * becomes a 422 whose message says what to change; unknown recipes, jar sizes, ingredients or
  * canners (including another household's) are refused the same way, naming the field.
  */
-export async function computePlan(db: Database, householdId: string, body: PlanRequestBody): Promise<PlanResult & { household: { name: string, altitudeFt: number | null, unitSystem: 'us' | 'metric' } }> {
-  const [{ catalogue, recipes, ingredients }, household, cannerRows] = await Promise.all([
+export async function computePlan(db: Database, householdId: string, body: PlanRequestBody, saved?: { planId: string }): Promise<PlanResult & { household: { name: string, altitudeFt: number | null, unitSystem: 'us' | 'metric', currency: Currency } }> {
+  const [{ catalogue, recipes, ingredients }, household, cannerRows, progress] = await Promise.all([
     loadCatalogue(db, householdId),
     loadHouseholdSettings(db, householdId),
     loadCanners(db, householdId),
+    saved ? planProgress(db, householdId, saved.planId) : undefined,
   ])
   const cannerIds = body.cannerIds ?? [body.cannerId!]
   const canners = cannerIds.map((id, i) => {
@@ -55,21 +57,28 @@ export async function computePlan(db: Database, householdId: string, body: PlanR
     }
   })
 
+  // What the household eats of a recipe counts once, on the first line planning it (by any bean).
+  const baseOf = (id: string) => id.split('~')[0]!
+  const eaten = (household.jarsEatenPerMonth ?? []).flatMap((e) => {
+    const line = lines.find(l => baseOf(l.recipeId) === e.recipeId)
+    return line ? [{ recipeId: line.recipeId, jarsPerMonth: e.jarsPerMonth }] : []
+  })
+
   try {
     const result = planBatch(
-      { lines, canners, startAt: body.startAt, soak: body.soak, altitudeFt: body.altitudeFt ?? household.altitudeFt, today: householdToday(household.timeZone) },
+      { lines, canners, startAt: body.startAt, soak: body.soak, altitudeFt: body.altitudeFt ?? household.altitudeFt, today: householdToday(household.timeZone), progress },
       { ...catalogue, recipes: planningRecipes },
-      household,
+      { ...household, jarsEatenPerMonth: eaten },
     )
     // Report the recipe ids the household knows, not the per-bean variants made above.
-    const baseId = (id: string) => id.split('~')[0]!
+    const baseId = baseOf
     for (const line of result.lines) line.recipeId = baseId(line.recipeId)
     for (const load of result.loads) {
       load.recipeIds = [...new Set(load.recipeIds.map(baseId))]
       for (const c of load.contents) c.recipeId = baseId(c.recipeId)
     }
     for (const step of result.schedule.steps) if (step.recipeId) step.recipeId = baseId(step.recipeId)
-    return { ...result, household: { name: household.name, altitudeFt: household.altitudeFt, unitSystem: household.unitSystem } }
+    return { ...result, household: { name: household.name, altitudeFt: household.altitudeFt, unitSystem: household.unitSystem, currency: household.currency } }
   }
   catch (error) {
     if (error instanceof PlanningRefusal) refusal(error.message, requestField(error.field, body))
@@ -85,6 +94,29 @@ function requestField(field: string | undefined, body: PlanRequestBody): string 
   if (!field) return undefined
   const dotted = field.replace(/\[(\d+)\]/g, '.$1').replace('.amount.', '.')
   return dotted.replace(/^canners\.(\d+)/, (_, k: string) => (body.cannerIds ? `cannerIds.${k}` : 'cannerId'))
+}
+
+/**
+ * How far a saved plan has got: the plan loads logged (a reprocessing run is not a new load of
+ * the plan), what their lines took out of the household's stock, and the Market list items
+ * marked as already at home.
+ */
+export async function planProgress(db: Db, householdId: string, planId: string): Promise<PlanProgress> {
+  const [loads, taken, marks] = await Promise.all([
+    db.selectDistinct({ index: tables.canningLoads.planLoadIndex }).from(tables.canningLoads)
+      .where(and(eq(tables.canningLoads.householdId, householdId), eq(tables.canningLoads.planId, planId), isNull(tables.canningLoads.reprocessOfId), isNotNull(tables.canningLoads.planLoadIndex))),
+    db.select({ jarSizeId: tables.loadLines.jarSizeId, jars: tables.loadLines.jarsFromStock, grams: tables.loadLines.dryGramsFromStock, ingredientId: tables.loadLines.dryGoodsIngredientId })
+      .from(tables.loadLines).innerJoin(tables.canningLoads, eq(tables.canningLoads.id, tables.loadLines.loadId))
+      .where(and(eq(tables.canningLoads.householdId, householdId), eq(tables.canningLoads.planId, planId), isNull(tables.canningLoads.reprocessOfId))),
+    db.select({ itemKey: tables.marketChecks.itemKey }).from(tables.marketChecks)
+      .where(and(eq(tables.marketChecks.planId, planId), eq(tables.marketChecks.householdId, householdId), eq(tables.marketChecks.state, 'at-home'))),
+  ])
+  return {
+    loggedLoads: loads.map(l => l.index!),
+    jarsTaken: taken.filter(t => t.jars > 0).map(t => ({ jarSizeId: t.jarSizeId, count: t.jars })),
+    dryGramsTaken: taken.filter(t => t.grams > 0 && t.ingredientId).map(t => ({ ingredientId: t.ingredientId!, grams: t.grams })),
+    atHome: marks.map(m => m.itemKey),
+  }
 }
 
 /** A saved plan of this household, or a 404 that reveals nothing about other households. */

@@ -30,7 +30,7 @@ export const mlForGrams = (grams: number, ingredient: Ingredient): number =>
  * fraction headspace ÷ height of the nominal capacity. A rough figure, used only to estimate
  * how much hot liquid to heat.
  */
-function volumeToHeadspaceMl(jar: JarSize, headspaceMm: number): number {
+export function volumeToHeadspaceMl(jar: JarSize, headspaceMm: number): number {
   return jar.capacityMl * Math.max(0, 1 - headspaceMm / jar.heightMm)
 }
 

@@ -43,6 +43,7 @@ export {
 export {
   buildShopping,
   cheapestCombination,
+  marketItemKey,
   type Combination,
   type PackageOption,
   type ShoppingItem,
@@ -50,6 +51,6 @@ export {
   type ShoppingNeeds,
   type ShoppingPackage,
 } from './shopping'
-export { costSummary, type CostInput, type CostSummary } from './cost'
+export { DRAINED_ML_PER_NET_GRAM, DEFAULT_STORE_CAN, costSummary, storeCanBeansMl, type CostInput, type CostSummary } from './cost'
 export * from './results'
 export { planBatch } from './plan'

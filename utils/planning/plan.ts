@@ -6,6 +6,7 @@
  * and the day; buy what is missing; price the batch; add the standing cautions.
  */
 import { costSummary } from './cost'
+import { volumeToHeadspaceMl } from './fill'
 import { PlanningRefusal, info, type PlanWarning } from './errors'
 import { buildLoads } from './loads'
 import { planLine } from './lines'
@@ -111,35 +112,75 @@ export function planBatch(
   const schedule = buildSchedule(loads, start, steps, recipesOfDay, request.soak)
 
   const ingredientOf = (l: LineResult): string => planned[l.lineIndex]!.recipe.ingredientId
-  const jarsBySize = sumBy(lines, l => l.jarSizeId, l => l.jars)
+  const vinegarPerJar = options.vinegarMlPerJar ?? DEFAULT_VINEGAR_ML_PER_JAR
   const saltGrams = lines.reduce((s, l) => s + l.saltGramsTotal, 0)
-  const vinegarMl = totalJars * (options.vinegarMlPerJar ?? DEFAULT_VINEGAR_ML_PER_JAR)
   const buying = lines.filter(l => l.suppliedGrams === null)
+  /** What jars of each line need from the market: dry goods to buy, salt, jars by size, vinegar. */
+  const needsOf = (jarsOfLine: (l: LineResult) => number) => {
+    const jars = lines.reduce((s, l) => s + jarsOfLine(l), 0)
+    return {
+      ingredientGrams: sumBy(buying, ingredientOf, l => l.perJar.dryGrams * jarsOfLine(l)),
+      saltGrams: lines.reduce((s, l) => s + l.perJar.saltGrams * jarsOfLine(l), 0),
+      jarsBySize: sumBy(lines.filter(l => jarsOfLine(l) > 0), l => l.jarSizeId, jarsOfLine),
+      vinegarMl: jars * vinegarPerJar,
+    }
+  }
+  // A plan part-way through its canning: the market list is what the loads not yet logged need,
+  // bought against today's stock (which the logged loads already drew on).
+  const progress = request.progress
+  const logged = new Set((progress?.loggedLoads ?? []).filter(i => loads.some(l => l.index === i)))
+  const jarsLeft = (l: LineResult): number => loads
+    .filter(load => !logged.has(load.index))
+    .reduce((s, load) => s + load.contents.filter(c => c.lineIndex === l.lineIndex).reduce((t, c) => t + c.jars, 0), 0)
+  const marks = { atHome: progress?.atHome ?? [] }
+  const fullNeeds = needsOf(l => l.jars)
   const shopping = buildShopping(
-    { ingredientGrams: sumBy(buying, ingredientOf, l => l.dryGramsTotal), saltGrams, jarsBySize, vinegarMl },
+    logged.size ? needsOf(jarsLeft) : fullNeeds,
     household,
     catalogue.ingredients,
     catalogue.jarSizes,
     system,
+    marks,
   )
-  for (const item of shopping.items) {
+  // The batch's cost stays what it was before any load was logged: priced against the stock the
+  // household had then (today's stock plus what the logged loads took out of it).
+  const withTaken = <T extends { count: number } | { grams: number }>(now: readonly T[] | undefined, taken: readonly T[] | undefined): T[] => [...(now ?? []), ...(taken ?? [])]
+  const atStart: HouseholdSettings = logged.size
+    ? { ...household, jarsOwned: withTaken(household.jarsOwned, progress?.jarsTaken), dryGoodsOnHand: withTaken(household.dryGoodsOnHand, progress?.dryGramsTaken) }
+    : household
+  const costing = logged.size ? buildShopping(fullNeeds, atStart, catalogue.ingredients, catalogue.jarSizes, system, marks).items : shopping.items
+  for (const item of costing) {
     const last = buying.filter(l => item.kind === 'ingredient' && ingredientOf(l) === item.ref).pop()
     if (last) last.leftoverGrams = item.leftover
   }
 
   const eaten = planned.flatMap(p => (p.load.jarsPerMonth === null ? [] : [p.load.jarsPerMonth]))
+  const measured = (household.jarsEatenPerMonth ?? [])
+    .filter(e => planned.some(p => p.recipe.id === e.recipeId))
+    .reduce((s, e) => s + e.jarsPerMonth, 0)
+  // The beans in a jar, for the store comparison: the dry volume swollen by the ingredient's
+  // expansion ratio, but never more than the jar holds up to its headspace line.
+  const beansPerJar = (l: LineResult): number => Math.min(
+    l.perJar.dryMl * (catalogue.ingredients.find(g => g.id === ingredientOf(l))?.expansionRatio ?? 1),
+    volumeToHeadspaceMl(jarOf(l.jarSizeId), l.headspaceMm),
+  )
+  const beansMl = sumBy(lines, l => l.jarSizeId, l => beansPerJar(l) * l.jars)
   const cost = costSummary(
     {
       jars: totalJars,
       gramsUsed: sumBy(lines, ingredientOf, l => l.dryGramsTotal),
       saltGrams,
-      vinegarMl,
-      jarsBySize,
+      vinegarMl: fullNeeds.vinegarMl,
+      jarsBySize: fullNeeds.jarsBySize,
       jarsPerMonth: eaten.length ? eaten.reduce((s, n) => s + n, 0) : null,
+      measuredJarsPerMonth: measured > 0 ? measured : null,
+      beansMlBySize: new Map([...beansMl].map(([id, ml]) => [id, ml / fullNeeds.jarsBySize.get(id)!])),
+      ingredientNames: new Map(catalogue.ingredients.map(g => [g.id, g.name])),
     },
     shopping.items,
     household,
     catalogue.jarSizes,
+    costing,
   )
 
   const recipes = [...new Set(planned.map(p => p.recipe))]
@@ -158,6 +199,11 @@ export function planBatch(
     layout: layouts[0]!,
     layouts,
     shopping: shopping.items,
+    progress: {
+      loggedLoads: [...logged].sort((a, b) => a - b),
+      loadsLeft: loads.length - logged.size,
+      jarsLeft: lines.reduce((s, l) => s + jarsLeft(l), 0),
+    },
     schedule,
     cost,
     water: {

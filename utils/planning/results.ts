@@ -81,7 +81,10 @@ export interface PlanResult {
   layout: CannerLayout
   /** One drawing per canner and jar size the loads use. */
   layouts: CannerLayout[]
+  /** What is still to buy: for a saved plan in progress, what the loads not yet logged need. */
   shopping: ShoppingItem[]
+  /** A saved plan's loads logged so far (by index) and what is left to can. */
+  progress: { loggedLoads: number[], loadsLeft: number, jarsLeft: number }
   schedule: Schedule
   cost: CostSummary
   water: {

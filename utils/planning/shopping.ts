@@ -4,7 +4,7 @@
  */
 import { info, type PlanWarning } from './errors'
 import type { HouseholdSettings, Ingredient, JarSize, PriceItem, UnitSystem } from './types'
-import { formatMass, formatVolume } from './units'
+import { countOf, formatMass, formatVolume } from './units'
 
 export interface PackageOption {
   /** Grams, millilitres or pieces in one package. */
@@ -80,6 +80,8 @@ export interface ShoppingPackage {
 }
 
 export interface ShoppingItem {
+  /** Stable across recomputes ("ingredient:black-beans", "lid:regular"): what check-offs are kept by. */
+  key: string
   kind: ShoppingKind
   /** What to buy, e.g. "Black beans" or "Lids, regular mouth". */
   item: string
@@ -96,6 +98,15 @@ export interface ShoppingItem {
   /** For ingredients: the ingredient; for lids and jars: the jar size or mouth the price matched. */
   ref?: string
   note?: string
+  /** Salt and vinegar: a household often has enough at home (said in the note). */
+  optional: boolean
+  /** The household marked it as already at home: listed, but left out of the shopping total. */
+  atHome: boolean
+}
+
+/** The key of a market list item: its kind and what it refers to. */
+export function marketItemKey(item: { kind: string, ref?: string, item: string }): string {
+  return `${item.kind}:${item.ref ?? item.item}`
 }
 
 export interface ShoppingNeeds {
@@ -107,13 +118,23 @@ export interface ShoppingNeeds {
   vinegarMl: number
 }
 
+export interface ShoppingMarks {
+  /** Keys of items the household marked as already at home. */
+  atHome?: readonly string[]
+}
+
+type ItemBase = Omit<ShoppingItem, 'packages' | 'cost' | 'leftover' | 'key' | 'optional' | 'atHome'> & { optional?: boolean }
+
 /** One shopping item from a need and the household's price options for it. */
 function priced(
-  base: Omit<ShoppingItem, 'packages' | 'cost' | 'leftover'>,
+  input: ItemBase,
   options: readonly PackageOption[],
   label: (size: number) => string,
   missing: string[],
+  atHome: ReadonlySet<string>,
 ): ShoppingItem {
+  const key = marketItemKey(input)
+  const base = { ...input, key, optional: input.optional ?? false, atHome: atHome.has(key) }
   const combo = cheapestCombination(base.quantity, options)
   if (!combo) {
     missing.push(base.item)
@@ -156,7 +177,8 @@ export function lidOptions(prices: readonly PriceItem[], jar: JarSize | undefine
 
 /**
  * Build the market list. Rules the model leaves open, chosen as a careful canner would:
- * - dry goods: only what the household does not already have (lines given as goods add none);
+ * - dry goods: only what the household does not already have (lines given as goods add none,
+ *   and the dry goods on hand in the pantry are taken off the need);
  * - jars: those beyond the empty jars owned of each size, in whole cases;
  * - lids: one new lid per jar, less the lids that come with the new jars bought (a case of jars
  *   comes with a lid and band for each, including jars left over for later);
@@ -169,28 +191,34 @@ export function buildShopping(
   ingredients: readonly Ingredient[],
   jarSizes: readonly JarSize[],
   system: UnitSystem,
+  marks: ShoppingMarks = {},
 ): { items: ShoppingItem[], warnings: PlanWarning[] } {
   const prices = household.prices
+  const atHomeKeys = new Set(marks.atHome ?? [])
   const items: ShoppingItem[] = []
   const missing: string[] = []
   const mass = (g: number): string => formatMass(g, system)
   const atHome = 'Skip if you have enough at home.'
 
-  for (const [ingredientId, grams] of needs.ingredientGrams) {
-    if (grams <= 0) continue
+  for (const [ingredientId, need] of needs.ingredientGrams) {
+    const onHand = (household.dryGoodsOnHand ?? []).filter(g => g.ingredientId === ingredientId).reduce((s, g) => s + g.grams, 0)
+    const grams = need - onHand
+    // Less than a gram short is weighing noise, not something to buy.
+    if (grams < 1) continue
     const name = ingredients.find(i => i.id === ingredientId)?.name ?? ingredientId
     const options = optionsOf(prices, 'ingredient', p => p.packageGrams, p => p.ingredientId === ingredientId)
     const base = {
       kind: 'ingredient' as const, item: name, quantity: grams, unit: 'g' as const, display: mass(grams), ref: ingredientId,
+      ...(onHand > 0 ? { note: `Needs ${mass(need)}; ${mass(onHand)} is in the pantry.` } : {}),
     }
-    items.push(priced(base, options, mass, missing))
+    items.push(priced(base, options, mass, missing, atHomeKeys))
   }
   if (needs.saltGrams > 0) {
     const base = {
       kind: 'salt' as const, item: 'Canning salt', quantity: needs.saltGrams, unit: 'g' as const,
-      display: mass(needs.saltGrams), note: atHome,
+      display: mass(needs.saltGrams), note: atHome, optional: true,
     }
-    items.push(priced(base, optionsOf(prices, 'salt', p => p.packageGrams), mass, missing))
+    items.push(priced(base, optionsOf(prices, 'salt', p => p.packageGrams), mass, missing, atHomeKeys))
   }
 
   const lids = new Map<string, { count: number } & ReturnType<typeof lidOptions>>()
@@ -202,10 +230,10 @@ export function buildShopping(
     if (buy > 0) {
       const base = {
         kind: 'jar' as const, item: `${jar?.name ?? jarSizeId} jars`, quantity: buy, unit: 'count' as const,
-        display: `${buy} jars`, ref: jarSizeId, note: `You own ${owned}; new jars come with lids and bands.`,
+        display: countOf(buy, 'jar'), ref: jarSizeId, note: `Needs ${countOf(jars, 'jar')}; you have ${countOf(owned, 'empty jar')}. New jars come with lids and bands.`,
       }
       const options = optionsOf(prices, 'jar', p => p.packCount, p => p.jarSizeId === jarSizeId)
-      const bought = priced(base, options, n => `case of ${n}`, missing)
+      const bought = priced(base, options, n => `case of ${n}`, missing, atHomeKeys)
       items.push(bought)
       lidsWithJars = buy + bought.leftover
     }
@@ -218,17 +246,17 @@ export function buildShopping(
     if (lid.count <= 0) continue
     const base = {
       kind: 'lid' as const, item: lid.name, quantity: lid.count, unit: 'count' as const,
-      display: `${lid.count} lids`, ref: lid.ref,
+      display: countOf(lid.count, 'lid'), ref: lid.ref,
     }
-    items.push(priced(base, lid.options, n => `pack of ${n}`, missing))
+    items.push(priced(base, lid.options, n => `pack of ${n}`, missing, atHomeKeys))
   }
   if (needs.vinegarMl > 0) {
     const volume = (ml: number): string => formatVolume(ml, system)
     const base = {
       kind: 'vinegar' as const, item: 'White vinegar (for wiping rims)', quantity: needs.vinegarMl, unit: 'mL' as const,
-      display: volume(needs.vinegarMl), note: atHome,
+      display: volume(needs.vinegarMl), note: atHome, optional: true,
     }
-    items.push(priced(base, optionsOf(prices, 'vinegar', p => p.packageMl), volume, missing))
+    items.push(priced(base, optionsOf(prices, 'vinegar', p => p.packageMl), volume, missing, atHomeKeys))
   }
   const warnings = missing.length
     ? [info('no-price', `No price on file for ${missing.join(', ')}; the costs leave them out. Add them on the Household page.`)]

@@ -138,14 +138,35 @@ export interface HouseholdSettings {
   /** Null until the household enters it; the planner then refuses to give a pressure. */
   altitudeFt: number | null
   unitSystem: UnitSystem
-  /** Price of one store-bought can of the same product, compared one can per jar. */
+  /** Price of one store-bought can of the same product. */
   storeCanPriceCents: number
+  /**
+   * The store can compared with, by equal volume of beans: its net weight in grams ('net', as
+   * printed on the can) or the drained beans it holds in mL ('drained'). Default: a 15-oz can, net.
+   */
+  storeCan?: { basis: 'net' | 'drained', amount: number }
   /** Expected uses of one jar, for amortising jars bought for this batch. */
   jarUses: number
   /** Natural cool-down to zero pressure; defaults 30 (pints and smaller) and 45 (larger). */
   coolDownMinutes?: { pint: number, quart: number }
   jarsOwned: Array<{ jarSizeId: string, count: number }>
+  /** Dry goods in the pantry, by ingredient (grams): the market list buys only the rest. */
+  dryGoodsOnHand?: Array<{ ingredientId: string, grams: number }>
+  /** What the household eats, measured from its Shelf: jars a month by recipe, for the yearly saving. */
+  jarsEatenPerMonth?: Array<{ recipeId: string, jarsPerMonth: number }>
   prices: PriceItem[]
+}
+
+/**
+ * A saved plan part-way through its canning: the loads already logged, and what they took out
+ * of the household's stock (so the plan's cost stays what it was before they were logged).
+ * Market list items the household marked as already at home are named by their item key.
+ */
+export interface PlanProgress {
+  loggedLoads: number[]
+  jarsTaken?: Array<{ jarSizeId: string, count: number }>
+  dryGramsTaken?: Array<{ ingredientId: string, grams: number }>
+  atHome?: string[]
 }
 
 export type LineAmount
@@ -176,6 +197,8 @@ export interface PlanRequest {
   today: string
   /** How soaking recipes are hydrated; overnight unless said (a recipe that allows only the quick method uses it). */
   soak?: SoakMethod
+  /** A saved plan in progress: its market list is what the loads not yet logged still need. */
+  progress?: PlanProgress
 }
 
 export interface Catalogue {

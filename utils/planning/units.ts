@@ -98,6 +98,16 @@ export function kitchenMeasure(value: number, unit: KitchenUnit): KitchenMeasure
 const grouped = (x: number, digits = 0): string =>
   x.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits })
 
+const pluralRules = new Intl.PluralRules('en-US')
+
+/**
+ * "1 jar", "2 jars", "1,200 jars": a count and its noun, the plural chosen by Intl.PluralRules.
+ * `plural` defaults to the noun + "s"; give it for nouns that change otherwise ("1 box", "2 boxes").
+ */
+export function countOf(n: number, noun: string, plural = `${noun}s`): string {
+  return `${grouped(n, Number.isInteger(n) ? 0 : 1)} ${pluralRules.select(n) === 'one' ? noun : plural}`
+}
+
 /** Weight for display: "340 g" / "1.47 kg", or "12 oz" / "3 lb 4 oz" to the nearest ounce. */
 export function formatMass(grams: number, system: UnitSystem): string {
   if (system === 'metric') return grams < 1000 ? `${grouped(grams)} g` : `${grouped(grams / 1000, 2)} kg`

@@ -242,3 +242,10 @@ export const JarStockSchema = z.object({
   count: num('Enter how many empty jars you have.').int('Enter whole jars.').min(0, 'You cannot own fewer than 0 jars.').max(10_000, 'More than 10,000 jars looks like a typing slip.'),
 })
 export type JarStockInput = z.infer<typeof JarStockSchema>
+
+/** Dry goods on hand in the pantry: one ingredient's weight in grams (0 removes it). */
+export const DryGoodsSchema = z.object({
+  ingredientId: z.string({ required_error: 'Choose the bean.', invalid_type_error: 'Choose the bean.' }).min(1, 'Choose the bean.').max(120),
+  grams: num('Enter how much you have.').min(0, 'You cannot have less than nothing; enter 0 to clear it.').max(1_000_000, 'More than 1,000 kg (2,200 lb) looks like a typing slip.'),
+})
+export type DryGoodsInput = z.infer<typeof DryGoodsSchema>

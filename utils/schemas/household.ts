@@ -1,6 +1,6 @@
 import { z } from './z'
 import { isTimeZone } from '../time'
-import { unitSystems } from '../vocabulary'
+import { currencies, storeCanBases, unitSystems } from '../vocabulary'
 import { numberField } from './fields'
 
 export { roleRank } from '../vocabulary'
@@ -28,6 +28,9 @@ export const HouseholdSettingsSchema = z.object({
   }),
   unitSystem: z.enum(unitSystems, { errorMap: () => ({ message: 'Choose US customary or metric.' }) }),
   storeCanPriceCents: numberField('Enter the price of one store-bought can.', { whole: true, fraction: 'Enter the price to the cent.', min: 0, low: 'A price cannot be negative.', max: 100_000, high: 'Enter the price of one can (at most 1,000).' }),
+  storeCanBasis: z.enum(storeCanBases, { errorMap: () => ({ message: 'Say whether the can size is its net weight or its drained beans.' }) }),
+  storeCanAmount: numberField('Enter the size of the store can.', { min: 30, low: 'A can smaller than 30 g (1 oz) or 30 mL is not a can of beans; check the size.', max: 5000, high: 'A can over 5 kg (11 lb) or 5 L is not a household can; check the size.' }),
+  currency: z.enum(currencies, { errorMap: () => ({ message: `Choose one of the currencies: ${currencies.join(', ')}.` }) }),
   jarUses: numberField('Enter how many seasons a jar lasts.', { whole: true, min: 1, low: 'A jar is used at least once.', max: 100, high: 'A jar does not last more than 100 seasons.' }),
   coolDownPintMinutes: numberField('Enter the cool-down minutes for pints.', { whole: true, min: 10, low: 'Natural cool-down takes at least 10 minutes.', max: 180, high: 'Natural cool-down takes less than 3 hours.' }),
   coolDownQuartMinutes: numberField('Enter the cool-down minutes for quarts.', { whole: true, min: 10, low: 'Natural cool-down takes at least 10 minutes.', max: 180, high: 'Natural cool-down takes less than 3 hours.' }),

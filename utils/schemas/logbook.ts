@@ -76,16 +76,24 @@ export function asLoadForm<T extends z.ZodTypeAny>(schema: T, zone: () => string
   }, schema)
 }
 
-/** Record how a pending (reprocessing) load was run, or change a load's notes. */
+/**
+ * Record how a pending (reprocessing) load was run; correct a logged load (its times, pressure,
+ * minutes, and the jars of its lines before the seal check); change its notes; or confirm it.
+ */
 export const LoadUpdateSchema = z.object({
   ...processFields,
   startedAt: instant('started'),
   endedAt: instant('came out'),
   notes: NOTES,
+  lines: z.array(z.object({
+    id: uuid('load line'),
+    jars: LoadLineSchema.shape.jars,
+  }), { invalid_type_error: 'Send the lines as a list of line ids and jar counts.' }).min(1, 'Send at least one line to correct.').max(8, 'A load has at most 8 lines.')
+    .refine(lines => new Set(lines.map(l => l.id)).size === lines.length, 'Name each line once.'),
   /** The canner confirms a load the Canning day logged. */
   confirmed: z.literal(true, { errorMap: () => ({ message: 'Send confirmed: true to confirm the load.' }) }),
 }).partial().superRefine((body, ctx) => {
-  if (Object.keys(body).length === 0) ctx.addIssue({ code: z.ZodIssueCode.custom, path: [], message: 'Send the run (pressure, minutes, start and end), the notes, or confirmed.' })
+  if (Object.keys(body).length === 0) ctx.addIssue({ code: z.ZodIssueCode.custom, path: [], message: 'Send the run (pressure, minutes, start and end), the jars, the notes, or confirmed.' })
   checkTimes(body, ctx)
 })
 export type LoadUpdateInput = z.infer<typeof LoadUpdateSchema>

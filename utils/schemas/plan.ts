@@ -70,3 +70,6 @@ export const PlanUpdateSchema = z.object({
 
 export type PlanLineBody = z.infer<typeof PlanLineSchema>
 export type PlanRequestBody = z.infer<typeof PlanRequestSchema>
+
+/** Preview a change to a saved plan: its progress (loads logged, at-home marks) applies. */
+export const PlanPreviewQuerySchema = z.object({ planId: z.string().uuid('That plan id is not valid.').optional() })

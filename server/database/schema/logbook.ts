@@ -74,6 +74,8 @@ export const loadLines = pgTable('load_lines', {
   /** What filling these jars took out of the household's stock, so a correction or a delete gives back exactly that. */
   jarsFromStock: integer('jars_from_stock').notNull().default(0),
   dryGramsFromStock: doublePrecision('dry_grams_from_stock').notNull().default(0),
+  /** The bean those dry grams were of (a recipe for any variety names its bean only in the plan). */
+  dryGoodsIngredientId: text('dry_goods_ingredient_id'),
   sealed: integer('sealed'),
   unsealed: integer('unsealed'),
   unsealedAction: text('unsealed_action', { enum: unsealedActions }),

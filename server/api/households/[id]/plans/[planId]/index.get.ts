@@ -9,7 +9,7 @@ export default defineEventHandler(async (event) => {
   const plan = await requirePlan(db, id, planId)
   const referenceChanges = await referenceChangesSince(db, plan)
   try {
-    return { plan, referenceChanges, result: await computePlan(db, id, plan.request), refusal: null }
+    return { plan, referenceChanges, result: await computePlan(db, id, plan.request, { planId: plan.id }), refusal: null }
   }
   catch (error) {
     const status = (error as { statusCode?: number }).statusCode

@@ -8,7 +8,7 @@ export default defineEventHandler(async (event) => {
   const body = await validBody(event, PlanUpdateSchema)
   const current = await requirePlan(db, id, planId)
   // Only a new request is recomputed (and refused with 422); renaming never depends on today's data.
-  const result = body.request ? await computePlan(db, id, body.request) : null
+  const result = body.request ? await computePlan(db, id, body.request, { planId: current.id }) : null
   const [plan] = await db.update(tables.plans)
     .set({
       name: body.name ?? current.name,

@@ -1,0 +1,1 @@
+ALTER TABLE "load_lines" ADD COLUMN "dry_goods_ingredient_id" text;
