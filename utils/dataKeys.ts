@@ -27,6 +27,7 @@ export const dataKeys = {
   loads: (hid: Id) => `loads:${hid}`,
   load: (hid: Id, loadId: Id) => `load:${hid}:${loadId}`,
   shelf: (hid: Id) => `shelf:${hid}`,
+  shelfLot: (hid: Id, lotId: Id) => `shelf-lot:${hid}:${lotId}`,
   labels: (hid: Id) => `labels:${hid}`,
   board: (hid: Id) => `board:${hid}`,
 } as const

@@ -30,14 +30,16 @@ export async function pantryBoard(db: Database, householdId: string) {
     db.select({ shelvedAt: tables.shelfLots.shelvedAt, jarsIn: tables.shelfLots.jarsIn })
       .from(tables.shelfLots).where(eq(tables.shelfLots.householdId, householdId)),
     db.select({
-      movedAt: tables.shelfMovements.movedAt, jars: tables.shelfMovements.jars,
+      movedAt: tables.shelfMovements.movedAt, jars: tables.shelfMovements.jars, kind: tables.shelfMovements.kind,
       product: tables.shelfLots.product, recipeId: tables.shelfLots.recipeId, jarSizeId: tables.shelfLots.jarSizeId,
     })
       .from(tables.shelfMovements).innerJoin(tables.shelfLots, eq(tables.shelfLots.id, tables.shelfMovements.lotId))
       .where(and(eq(tables.shelfMovements.householdId, householdId), isNull(tables.shelfMovements.undoneAt))),
     db.select({ id: tables.canners.id }).from(tables.canners).where(eq(tables.canners.householdId, householdId)).limit(1),
   ])
-  const taken = moves.map(m => ({ at: m.movedAt, jars: m.jars, key: `${m.product}|${m.jarSizeId}`, product: m.product, recipeId: m.recipeId, jarSizeId: m.jarSizeId }))
+  // Only jars taken off are use; a correction (miscounted, broken, removed) changes the stock, not what the household eats.
+  const moved = moves.map(m => ({ at: m.movedAt, jars: m.jars, kind: m.kind, key: `${m.product}|${m.jarSizeId}`, product: m.product, recipeId: m.recipeId, jarSizeId: m.jarSizeId }))
+  const taken = moved.filter(m => m.kind === 'taken')
   return {
     now,
     /** What a new household must do before the planner can give a process: enter the altitude, add a canner. */
@@ -52,7 +54,7 @@ export async function pantryBoard(db: Database, householdId: string) {
     nearBestBy: shelf.lots.filter(l => l.bestByStatus === 'near'),
     fridge: shelf.fridge,
     sealRates: rates,
-    stockOverTime: stockSeries(lots.map(l => ({ at: l.shelvedAt, jars: l.jarsIn })), taken, now, zone),
+    stockOverTime: stockSeries(lots.map(l => ({ at: l.shelvedAt, jars: l.jarsIn })), moved, now, zone),
     usedPerMonth: usedPerMonth(taken, now, zone),
     jarsUsedPerMonth: jarsPerMonthByProduct(taken, now, zone),
   }

@@ -30,6 +30,8 @@ export interface ServerSettings {
   smtp: { url?: string, host?: string, port: number, secure: boolean, user?: string, pass: string }
   fakeSmtpPort: number
   publicUrl: string
+  /** SHELFSTEAD_PUBLIC_URL was given: links printed for phones (jar labels) use it rather than the address the page was opened at. */
+  publicUrlSet: boolean
   reminderIntervalMs: number
   storage: 'fs' | 's3'
   s3: { endpoint?: string, bucket?: string, region: string, accessKeyId?: string, secretAccessKey?: string }
@@ -66,6 +68,7 @@ export function readSettings(env: NodeJS.ProcessEnv, dev = Boolean(import.meta.d
     },
     fakeSmtpPort: integer(env.SHELFSTEAD_FAKE_SMTP_PORT, 0),
     publicUrl: (env.SHELFSTEAD_PUBLIC_URL || `http://localhost:${env.PORT || 3000}`).replace(/\/$/, ''),
+    publicUrlSet: Boolean(env.SHELFSTEAD_PUBLIC_URL),
     reminderIntervalMs: Math.max(200, integer(env.SHELFSTEAD_REMINDER_INTERVAL_MS, 60_000)),
     storage: env.SHELFSTEAD_STORAGE?.toLowerCase() === 's3' ? 's3' : 'fs',
     s3: {

@@ -1,11 +1,9 @@
 import { randomUUID } from 'node:crypto'
-import { and, desc, eq, gt, inArray, isNull, sql } from 'drizzle-orm'
-import { parse } from 'csv-parse/sync'
-import { stringify } from 'csv-stringify/sync'
-import { bestByDate, bestByStatus, fifo } from '~~/utils/after'
-import { ShelfCsvRowSchema, shelfCsvColumns, type TakeOffInput } from '~~/utils/schemas/shelf'
+import { and, desc, eq, gt, gte, inArray, isNull, sql } from 'drizzle-orm'
+import { bestByStatus, fifo } from '~~/utils/after'
+import { plural, pluralWord, shelfCorrectionCauseLabels } from '~~/utils/display'
+import type { LabelQuery, ShelfCorrectionInput, TakeOffInput } from '~~/utils/schemas/shelf'
 import type { Database, Tx } from './database'
-import { visibleRecipes } from './catalogue'
 import { fridgeList } from './sealCheck'
 import { recordActivity } from './activity'
 
@@ -35,16 +33,18 @@ export async function listShelf(db: Database, householdId: string, zone?: string
   }
 }
 
+/** The household's latest take-off not undone (corrections are not take-offs: Undo never reverses one). */
 async function lastBatch(db: Database | Tx, householdId: string) {
-  const [last] = await db.select({ batchId: tables.shelfMovements.batchId, movedAt: tables.shelfMovements.movedAt })
-    .from(tables.shelfMovements)
-    .where(and(eq(tables.shelfMovements.householdId, householdId), isNull(tables.shelfMovements.undoneAt)))
-    .orderBy(desc(tables.shelfMovements.movedAt), desc(tables.shelfMovements.id))
+  const m = tables.shelfMovements
+  const [last] = await db.select({ batchId: m.batchId, movedAt: m.movedAt })
+    .from(m)
+    .where(and(eq(m.householdId, householdId), eq(m.kind, 'taken'), isNull(m.undoneAt)))
+    .orderBy(desc(m.movedAt), desc(m.id))
     .limit(1)
   if (!last) return null
-  const rows = await db.select({ jars: tables.shelfMovements.jars, product: tables.shelfLots.product, loadCode: tables.shelfLots.loadCode })
-    .from(tables.shelfMovements).innerJoin(tables.shelfLots, eq(tables.shelfLots.id, tables.shelfMovements.lotId))
-    .where(eq(tables.shelfMovements.batchId, last.batchId))
+  const rows = await db.select({ lotId: m.lotId, jars: m.jars, product: tables.shelfLots.product, loadCode: tables.shelfLots.loadCode })
+    .from(m).innerJoin(tables.shelfLots, eq(tables.shelfLots.id, m.lotId))
+    .where(and(eq(m.batchId, last.batchId), eq(m.householdId, householdId)))
   return { batchId: last.batchId, movedAt: last.movedAt, jars: rows.reduce((s, r) => s + r.jars, 0), items: rows }
 }
 
@@ -65,7 +65,7 @@ export async function takeOff(db: Database, householdId: string, userId: string,
     const lot = lots.find(l => l.id === item.lotId)
     if (!lot) return notFound('No such lot on this household\'s Shelf.')
     if (item.jars > lot.jarsLeft) {
-      badInput(`items.${i}.jars`, `Only ${lot.jarsLeft} jars of ${lot.product} (${lot.loadCode || 'imported'}) are left on the Shelf.`)
+      badInput(`items.${i}.jars`, `Only ${plural(lot.jarsLeft, 'jar', 'jars')} of ${lot.product} (${lot.loadCode || 'imported'}) ${pluralWord(lot.jarsLeft, 'is', 'are')} left on the Shelf.`)
     }
   })
   const batchId = randomUUID()
@@ -84,24 +84,36 @@ export async function takeOff(db: Database, householdId: string, userId: string,
     }
     const jars = body.items.reduce((sum, item) => sum + item.jars, 0)
     const products = [...new Set(body.items.map(item => lots.find(l => l.id === item.lotId)!.product))].join(', ')
-    await recordActivity(tx, { householdId, userId, kind: 'shelf', summary: `Took ${jars} jar${jars === 1 ? '' : 's'} off the Shelf (${products})`, detail: { batchId } })
+    await recordActivity(tx, { householdId, userId, kind: 'shelf', summary: `Took ${plural(jars, 'jar', 'jars')} off the Shelf (${products})`, detail: { batchId } })
   })
   return { batchId, ...(await listShelf(db, householdId)) }
 }
 
-/** Undo the household's latest take-off: jars back on their lots, returned empty jars out of jar stock. */
-export async function undoLastTakeOff(db: Database, householdId: string, userId: string) {
+/**
+ * Undo the household's latest take-off: jars back on their lots, returned empty jars out of jar
+ * stock. With `batchId` (the lot page's own take-off) only that take-off, and only while it is
+ * the latest. A lot whose count was corrected after the take-off is not put back: the correction
+ * already says how many jars are there.
+ */
+export async function undoLastTakeOff(db: Database, householdId: string, userId: string, batchId?: string) {
   const now = serverNow()
   await db.transaction(async (tx) => {
     const last = await lastBatch(tx, householdId)
     if (!last) conflict('There is no take-off to undo.')
+    if (batchId && last.batchId !== batchId) conflict('That take-off was undone already, or jars have been taken off since; see the Shelf.')
+    const m = tables.shelfMovements
+    const [corrected] = await tx.select({ product: tables.shelfLots.product })
+      .from(m).innerJoin(tables.shelfLots, eq(tables.shelfLots.id, m.lotId))
+      .where(and(eq(m.householdId, householdId), eq(m.kind, 'correction'), isNull(m.undoneAt), gte(m.movedAt, last.movedAt), inArray(m.lotId, last.items.map(i => i.lotId))))
+      .limit(1)
+    if (corrected) conflict(`The count of ${corrected.product} was corrected after that take-off; put the count right with Correct on the Shelf instead.`)
     const moves = await tx.update(tables.shelfMovements).set({ undoneAt: now })
-      .where(and(eq(tables.shelfMovements.batchId, last.batchId), eq(tables.shelfMovements.householdId, householdId), isNull(tables.shelfMovements.undoneAt)))
+      .where(and(eq(tables.shelfMovements.batchId, last.batchId), eq(tables.shelfMovements.householdId, householdId), eq(tables.shelfMovements.kind, 'taken'), isNull(tables.shelfMovements.undoneAt)))
       .returning()
     if (!moves.length) conflict('That take-off was already undone.')
     for (const move of moves) {
       const [lot] = await tx.update(tables.shelfLots).set({ jarsLeft: sql`${tables.shelfLots.jarsLeft} + ${move.jars}`, updatedAt: now })
-        .where(eq(tables.shelfLots.id, move.lotId)).returning()
+        .where(and(eq(tables.shelfLots.id, move.lotId), eq(tables.shelfLots.householdId, householdId))).returning()
       if (move.jarsReturned > 0) {
         const [stock] = await tx.update(tables.jarStock)
           .set({ count: sql`${tables.jarStock.count} - ${move.jarsReturned}`, updatedAt: now })
@@ -130,88 +142,69 @@ export async function clearFridgeItem(db: Database, householdId: string, itemId:
   return listShelf(db, householdId)
 }
 
-// ---------------------------------------------------------------------------
-// CSV
-
-/** The Shelf as CSV, oldest first: the same columns the import reads. */
-export async function shelfCsv(db: Database, householdId: string): Promise<string> {
+/**
+ * The lots a label sheet prints, oldest first: the chosen ones (of this household), one load's,
+ * or the whole Shelf; each with the number of labels (one per jar left, or `count`).
+ */
+export async function labelLots(db: Database, householdId: string, query: Pick<LabelQuery, 'lots' | 'load' | 'count'>) {
   const { lots } = await listShelf(db, householdId)
-  return stringify(lots.map(l => ({
-    product: l.product,
-    recipe_id: l.recipeId ?? '',
-    jar_size: l.jarSizeId,
-    jars: l.jarsLeft,
-    canned_on: l.cannedOn,
-    best_by: l.bestBy,
-    load_code: l.loadCode,
-  })), { header: true, columns: [...shelfCsvColumns] })
+  const ids = query.lots ? query.lots.split(',').map(s => s.trim()).filter(Boolean) : null
+  const chosen = lots.filter(l => (!ids || ids.includes(l.id)) && (!query.load || l.loadId === query.load))
+  return chosen.map(l => ({
+    id: l.id, product: l.product, jarSizeName: l.jarSizeName, cannedOn: l.cannedOn, bestBy: l.bestBy, loadCode: l.loadCode, loadId: l.loadId,
+    jars: l.jarsLeft, labels: query.count ?? l.jarsLeft,
+  }))
 }
 
-export interface CsvIssue { line: number, field: string, message: string }
+/** One lot, as its jar label's QR code opens it: what it is, the jars left, and the latest take-off if it touched this lot. */
+export async function shelfLot(db: Database, householdId: string, lotId: string) {
+  const today = householdToday(await householdTimeZone(db, householdId))
+  const [row] = await db.select({ lot: tables.shelfLots, jarSizeName: tables.jarSizes.name })
+    .from(tables.shelfLots)
+    .innerJoin(tables.jarSizes, eq(tables.jarSizes.id, tables.shelfLots.jarSizeId))
+    .where(and(eq(tables.shelfLots.id, lotId), eq(tables.shelfLots.householdId, householdId)))
+  if (!row) notFound('No such lot on this household\'s Shelf.')
+  const { lot } = row
+  const last = await lastBatch(db, householdId)
+  return {
+    today,
+    lot: {
+      id: lot.id, product: lot.product, jarSizeId: lot.jarSizeId, jarSizeName: row.jarSizeName, cannedOn: lot.cannedOn, bestBy: lot.bestBy,
+      bestByStatus: bestByStatus(lot.bestBy, today), loadCode: lot.loadCode, loadId: lot.loadId, jarsIn: lot.jarsIn, jarsLeft: lot.jarsLeft,
+    },
+    lastTakeOff: last?.items.some(i => i.lotId === lotId) ? { batchId: last.batchId, movedAt: last.movedAt, jars: last.jars } : null,
+  }
+}
 
 /**
- * Import a Shelf inventory. Every row is checked (columns, jar size, recipe, dates, counts);
- * if any row is bad nothing is imported and the answer lists each problem with its line number
- * (the header is line 1).
+ * Put a lot's count right without calling it use: a 'correction' movement (the jars that left,
+ * negative when more were found) with the reason, the lot's new count and the activity record,
+ * in one transaction. Jars thrown out but kept go back to jar stock empty; miscounted, broken or
+ * lost jars and a lot recorded by mistake (never filled) leave jar stock as it is.
  */
-export async function importShelfCsv(db: Database, householdId: string, text: string) {
+export async function correctLot(db: Database, householdId: string, userId: string, lotId: string, body: ShelfCorrectionInput) {
   const now = serverNow()
-  const today = householdToday(await householdTimeZone(db, householdId))
-  let records: string[][]
-  try {
-    records = parse(text, { bom: true, skip_empty_lines: true, relax_column_count: true, trim: true })
-  }
-  catch (error) {
-    const line = (error as { lines?: number }).lines ?? 1
-    return { issues: [{ line, field: 'csv', message: `This is not readable CSV: ${(error as Error).message}` }] as CsvIssue[] }
-  }
-  const header = records[0]?.map(h => h.toLowerCase()) ?? []
-  const missing = shelfCsvColumns.filter(c => ['product', 'jar_size', 'jars', 'canned_on'].includes(c) && !header.includes(c))
-  if (!records.length || missing.length) {
-    return { issues: [{ line: 1, field: 'header', message: `The first line must name the columns ${shelfCsvColumns.join(', ')} (missing: ${missing.join(', ') || 'all'}).` }] as CsvIssue[] }
-  }
-  if (records.length === 1) return { issues: [{ line: 2, field: 'csv', message: 'The file has a header but no jars.' }] as CsvIssue[] }
-  if (records.length > 2001) return { issues: [{ line: 2002, field: 'csv', message: 'Import at most 2,000 lots at a time.' }] as CsvIssue[] }
-
-  const [jarSizes, recipes, [household]] = await Promise.all([
-    db.select({ id: tables.jarSizes.id }).from(tables.jarSizes),
-    db.select({ id: tables.recipes.id }).from(tables.recipes).where(visibleRecipes(householdId)),
-    db.select().from(tables.households).where(eq(tables.households.id, householdId)),
-  ])
-  const issues: CsvIssue[] = []
-  const rows: Array<typeof tables.shelfLots.$inferInsert> = []
-  records.slice(1).forEach((record, i) => {
-    const line = i + 2
-    const raw = Object.fromEntries(header.map((h, c) => [h, record[c] ?? '']))
-    const parsed = ShelfCsvRowSchema.safeParse(raw)
-    if (!parsed.success) {
-      for (const issue of parsed.error.issues) issues.push({ line, field: String(issue.path[0] ?? 'row'), message: issue.message })
-      return
-    }
-    const row = parsed.data
-    const rowIssues: CsvIssue[] = []
-    if (!jarSizes.some(j => j.id === row.jar_size)) rowIssues.push({ line, field: 'jar_size', message: `"${row.jar_size}" is not a jar size in the catalogue (for example pint-regular, quart-wide).` })
-    if (row.recipe_id && !recipes.some(r => r.id === row.recipe_id)) rowIssues.push({ line, field: 'recipe_id', message: `"${row.recipe_id}" is not a recipe in your Recipe book; leave it empty if unsure.` })
-    if (row.canned_on > today) rowIssues.push({ line, field: 'canned_on', message: 'The canned date is in the future.' })
-    const bestBy = row.best_by ?? bestByDate(row.canned_on, household!.bestByMonths)
-    if (bestBy <= row.canned_on) rowIssues.push({ line, field: 'best_by', message: 'The best-by date must come after the canned date.' })
-    issues.push(...rowIssues)
-    if (rowIssues.length) return
-    rows.push({
-      householdId, recipeId: row.recipe_id ?? null, product: row.product, jarSizeId: row.jar_size, loadCode: row.load_code,
-      cannedOn: row.canned_on, bestBy, jarsIn: row.jars, jarsLeft: row.jars, source: 'import', shelvedAt: now,
+  await db.transaction(async (tx) => {
+    const [lot] = await tx.select().from(tables.shelfLots)
+      .where(and(eq(tables.shelfLots.id, lotId), eq(tables.shelfLots.householdId, householdId))).for('update')
+    if (!lot) notFound('No such lot on this household\'s Shelf.')
+    const was = plural(lot.jarsLeft, 'jar', 'jars')
+    if (body.jarsLeft === lot.jarsLeft) badInput('jarsLeft', `The Shelf already shows ${was} of ${lot.product}; enter the count it should show.`)
+    const off = lot.jarsLeft - body.jarsLeft
+    if (off < 0 && body.cause !== 'miscounted') badInput('jarsLeft', `Broken, lost or thrown-out jars leave the Shelf: enter fewer than the ${was} there now, or choose Miscounted.`)
+    await tx.update(tables.shelfLots).set({ jarsLeft: body.jarsLeft, updatedAt: now }).where(eq(tables.shelfLots.id, lot.id))
+    const returned = body.cause === 'discarded' ? off : 0
+    const reason = body.note ? `${shelfCorrectionCauseLabels[body.cause]} — ${body.note}` : shelfCorrectionCauseLabels[body.cause]
+    const batchId = randomUUID()
+    await tx.insert(tables.shelfMovements).values({
+      householdId, batchId, lotId: lot.id, jars: off, kind: 'correction', reason, jarsReturned: returned, movedAt: now, movedBy: userId,
+    })
+    if (returned) await addJarStock(tx, householdId, lot.jarSizeId, returned)
+    const what = body.jarsLeft === 0 ? `Removed ${lot.product} (${lot.loadCode || 'imported'}) from the Shelf` : `Corrected ${lot.product} (${lot.loadCode || 'imported'}) from ${was} to ${plural(body.jarsLeft, 'jar', 'jars')}`
+    await recordActivity(tx, {
+      householdId, userId, kind: 'shelf', summary: `${what}: ${reason}`,
+      detail: { batchId, lotId: lot.id, cause: body.cause, from: lot.jarsLeft, to: body.jarsLeft, jarsReturned: returned },
     })
   })
-  if (issues.length) return { issues }
-  await db.transaction(async (tx) => {
-    await tx.insert(tables.shelfLots).values(rows)
-  })
-  return { issues: [] as CsvIssue[], imported: rows.length, jars: rows.reduce((s, r) => s + r.jarsIn!, 0) }
-}
-
-/** The lots a label sheet prints: the chosen ones (of this household), or the whole Shelf, oldest first. */
-export async function labelLots(db: Database, householdId: string, lotIds: string[] | null) {
-  const { lots } = await listShelf(db, householdId)
-  const chosen = lotIds ? lots.filter(l => lotIds.includes(l.id)) : lots
-  return chosen.map(l => ({ id: l.id, product: l.product, jarSizeName: l.jarSizeName, cannedOn: l.cannedOn, bestBy: l.bestBy, loadCode: l.loadCode, jars: l.jarsLeft }))
+  return listShelf(db, householdId)
 }

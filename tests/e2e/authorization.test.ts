@@ -71,6 +71,13 @@ async function freshFridgeItem(): Promise<string> {
   const shelf = (await clients.owner.get(hh('/shelf'))).body
   return shelf.fridge.find((f: { loadId?: string, id: string }) => f.id)!.id
 }
+/** A lot of its own for a call that changes it (a correction). */
+async function freshLot(): Promise<string> {
+  const product = `Matrix navy beans ${Math.random().toString(36).slice(2)}`
+  const res = await clients.owner.post(hh('/shelf/import'), { csv: `product,recipe_id,jar_size,jars,canned_on,best_by,load_code\n${product},,pint-regular,6,2026-09-01,,` })
+  expect(res.status).toBe(201)
+  return ((await clients.owner.get(hh('/shelf'))).body.lots as Array<{ id: string, product: string }>).find(l => l.product === product)!.id
+}
 const planRequest = () => ({ cannerId: H.cannerId, lines: [{ recipeId: 'usda-dried-beans-hot-pack', jarSizeId: 'pint-regular', jars: 9 }] })
 async function freshPlan() {
   const res = await clients.owner.post(hh('/plans'), { name: 'Pintos for the matrix', request: planRequest() })
@@ -201,6 +208,8 @@ const expectations: Record<string, Expectation> = {
   'POST /api/households/:id/shelf/import': { access: 'canner', call: () => ({ path: hh('/shelf/import'), body: { csv: 'product,recipe_id,jar_size,jars,canned_on,best_by,load_code\nNavy beans,,pint-regular,2,2026-10-01,,' } }) },
   'POST /api/households/:id/shelf/take-off': { access: 'helper', call: () => ({ path: hh('/shelf/take-off'), body: { items: [{ lotId: ids.lot, jars: 1 }] } }) },
   'POST /api/households/:id/shelf/undo': { access: 'helper', call: () => ({ path: hh('/shelf/undo') }) },
+  'GET /api/households/:id/shelf/lots/:lotId': { access: 'helper', call: () => ({ path: hh(`/shelf/lots/${ids.lot}`) }) },
+  'POST /api/households/:id/shelf/lots/:lotId/correction': { access: 'canner', call: async () => ({ path: hh(`/shelf/lots/${await freshLot()}/correction`), body: { jarsLeft: 4, cause: 'broken' } }) },
   'POST /api/households/:id/shelf/fridge/:itemId/clear': { access: 'helper', call: async () => ({ path: hh(`/shelf/fridge/${await freshFridgeItem()}/clear`) }) },
 }
 

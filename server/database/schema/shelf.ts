@@ -28,13 +28,15 @@ export const shelfLots = pgTable('shelf_lots', {
 
 /**
  * The Shelf's movement ledger: each take-off is a row; the rows of one take-off share a batch,
- * and undo marks the household's latest batch undone and puts its jars back.
+ * and undo marks the household's latest take-off undone and puts its jars back. A correction is
+ * a batch of its own and is never undone.
  */
 export const shelfMovements = pgTable('shelf_movements', {
   id: uuid('id').primaryKey().defaultRandom(),
   householdId: uuid('household_id').notNull().references(() => households.id, { onDelete: 'cascade' }),
   batchId: uuid('batch_id').notNull(),
   lotId: uuid('lot_id').notNull().references(() => shelfLots.id, { onDelete: 'cascade' }),
+  /** Jars that left the lot; a correction that found more jars than recorded is negative. */
   jars: integer('jars').notNull(),
   /** 'taken': eaten (counts as use on the Pantry board); 'correction': the count was wrong or the lot removed. */
   kind: text('kind', { enum: shelfMoveKinds }).notNull().default('taken'),

@@ -37,5 +37,7 @@ describe('server settings from the environment', () => {
   it('links in mail point at the public address without a trailing slash, else the local port', () => {
     expect(readSettings({ SHELFSTEAD_PUBLIC_URL: 'https://jars.example/' }).publicUrl).toBe('https://jars.example')
     expect(readSettings({ PORT: '4100' }).publicUrl).toBe('http://localhost:4100')
+    expect(readSettings({ SHELFSTEAD_PUBLIC_URL: 'https://jars.example/' }).publicUrlSet).toBe(true)
+    expect(readSettings({ PORT: '4100' }).publicUrlSet).toBe(false)
   })
 })

@@ -3,6 +3,8 @@ import { HouseholdParamsSchema } from '~~/utils/schemas/household'
 /**
  * Import a Shelf inventory from CSV (canner and up): the body is the CSV text (text/csv) or
  * JSON { csv }. All rows or none: any bad row answers 400 with every problem by line number.
+ * Rows naming a lot already on this Shelf (an export read back) are skipped and counted;
+ * 201 when lots were added, 200 when every row was skipped.
  */
 export default defineEventHandler(async (event) => {
   const { params: { id }, db, user } = await requireHouseholdRole(event, HouseholdParamsSchema, 'canner')
@@ -12,12 +14,11 @@ export default defineEventHandler(async (event) => {
     badInput('csv', 'Send the inventory as CSV text.')
   }
   if (text.length > 2_000_000) tooLarge('That file is larger than 2 MB; split it.', 'csv')
-  const result = await importShelfCsv(db, id, text)
-  if (result.issues.length) {
+  const result = await importShelfCsv(db, id, user.id, text)
+  if (result.imported === undefined) {
     const first = result.issues[0]!
     badInput(first.field, `Nothing was imported. Line ${first.line}: ${first.message}`, result.issues)
   }
-  await recordActivity(db, { householdId: id, userId: user.id, kind: 'shelf', summary: 'Imported an inventory onto the Shelf' })
-  setResponseStatus(event, 201)
+  if (result.imported) setResponseStatus(event, 201)
   return result
 })
