@@ -2,7 +2,7 @@ import { dataKeys } from '~/utils/dataKeys'
 import { afterLoadKeys, type LoadDetail } from '~/composables/useLoads'
 import type { LoadUpdateInput, SealCheckInput } from '~/utils/schemas/logbook'
 
-/** One logged load: its details, recording a reprocessing run, its seal check and its photos. */
+/** One logged load: its details, recording a reprocessing run or a correction, deleting it, its seal check and its photos. */
 export function useLoad(loadId: Ref<string>) {
   const id = useAuth().activeId
   const key = computed(() => dataKeys.load(id.value, loadId.value))
@@ -19,6 +19,13 @@ export function useLoad(loadId: Ref<string>) {
     await $fetch(url, { method: 'PATCH', body })
     await refreshNuxtData([key.value, ...others()])
   }
+  /** Delete a load logged by mistake; the Logbook, Shelf, stock and plans are reread. */
+  async function remove() {
+    const url: string = `/api/households/${id.value}/loads/${loadId.value}`
+    await $fetch(url, { method: 'DELETE' })
+    clearNuxtData(key.value)
+    await refreshNuxtData([...others(), dataKeys.jarStock(id.value), dataKeys.dryGoods(id.value), dataKeys.plans(id.value)])
+  }
   async function recordSealCheck(body: SealCheckInput) {
     await $fetch(`/api/households/${id.value}/seal-checks`, { method: 'POST', body })
     await refreshNuxtData([key.value, ...others()])
@@ -33,5 +40,5 @@ export function useLoad(loadId: Ref<string>) {
     await $fetch(`/api/households/${id.value}/photos/${photoId}`, { method: 'DELETE' })
     await refreshNuxtData(key.value)
   }
-  return { ...load, update, recordSealCheck, addPhoto, removePhoto }
+  return { ...load, update, remove, recordSealCheck, addPhoto, removePhoto }
 }

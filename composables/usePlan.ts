@@ -1,6 +1,7 @@
 import type { ApiAnswer } from '~/utils/api'
 import { dataKeys } from '~/utils/dataKeys'
 import type { PlanRequestBody } from '~/utils/schemas/plan'
+import type { PlanStatus } from '~/utils/vocabulary'
 
 export type SavedPlanView = ApiAnswer<'/api/households/:id/plans/:planId'>
 
@@ -15,9 +16,9 @@ export function usePlan(planId: Ref<string | null | undefined>) {
   })
   const base = () => `/api/households/${id.value}/plans/${planId.value}` as const
 
-  async function update(body: { name?: string, request?: PlanRequestBody }) {
+  async function update(body: { name?: string, status?: PlanStatus, request?: PlanRequestBody }) {
     await $fetch(base(), { method: 'PATCH', body })
-    await refreshNuxtData([key.value, dataKeys.plans(id.value), dataKeys.market(id.value, planId.value)])
+    await refreshNuxtData([key.value, dataKeys.plans(id.value), dataKeys.market(id.value, planId.value), dataKeys.board(id.value)])
   }
   async function copy() {
     const { plan: copied } = await $fetch(`${base()}/copy`, { method: 'POST' })

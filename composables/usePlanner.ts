@@ -3,7 +3,7 @@ import type { PlanRequestBody } from '~/utils/schemas/plan'
 /**
  * What the Batch planner works from, read once for both the new-plan and the saved-plan page:
  * the Recipe book, the jar catalogue, the beans, the household's canners, settings and
- * members, and the preview computation. `props` is what PlannerWorkspace takes.
+ * members, the dry goods in its pantry and what it eats, and the preview computation. `props` is what PlannerWorkspace takes.
  */
 export function usePlanner(planId?: Ref<string | null | undefined>) {
   const { data: recipes } = useRecipes()
@@ -13,6 +13,8 @@ export function usePlanner(planId?: Ref<string | null | undefined>) {
   const { data: members } = useMembers()
   const { household: { data: household }, units } = useHousehold()
   const { preview } = usePlans()
+  const { data: pantry } = useDryGoods()
+  const { data: board } = useBoard()
 
   const ready = computed(() => Boolean(recipes.value && jarSizes.value && ingredients.value))
   const props = computed(() => ({
@@ -24,6 +26,8 @@ export function usePlanner(planId?: Ref<string | null | undefined>) {
     household: household.value ?? null,
     units: units.value,
     onPreview: (body: PlanRequestBody) => preview(body, planId?.value),
+    pantry: pantry.value ?? [],
+    supply: board.value?.supply ?? [],
   }))
   return { recipes, jarSizes, ready, props }
 }

@@ -19,6 +19,7 @@ export const dataKeys = {
   canners: (hid: Id) => `canners:${hid}`,
   prices: (hid: Id) => `prices:${hid}`,
   jarStock: (hid: Id) => `jar-stock:${hid}`,
+  dryGoods: (hid: Id) => `dry-goods:${hid}`,
   recipes: (hid: Id) => `recipes:${hid}`,
   recipe: (hid: Id, recipeId: Id) => `recipe:${hid}:${recipeId}`,
   plans: (hid: Id) => `plans:${hid}`,

@@ -1,5 +1,5 @@
 import { and, desc, eq, inArray, isNull } from 'drizzle-orm'
-import { jarsPerMonthByProduct, stockSeries, usedPerMonth } from '~~/utils/after'
+import { jarsPerMonthByProduct, monthsOfSupply, stockSeries, usedPerMonth } from '~~/utils/after'
 import { openPlanStatuses } from '~~/utils/vocabulary'
 import type { Database } from './database'
 import { loadsAwaitingCheck } from './logbook'
@@ -40,6 +40,7 @@ export async function pantryBoard(db: Database, householdId: string) {
   // Only jars taken off are use; a correction (miscounted, broken, removed) changes the stock, not what the household eats.
   const moved = moves.map(m => ({ at: m.movedAt, jars: m.jars, kind: m.kind, key: `${m.product}|${m.jarSizeId}`, product: m.product, recipeId: m.recipeId, jarSizeId: m.jarSizeId }))
   const taken = moved.filter(m => m.kind === 'taken')
+  const eaten = jarsPerMonthByProduct(taken, now, zone)
   return {
     now,
     /** What a new household must do before the planner can give a process: enter the altitude, add a canner. */
@@ -56,6 +57,8 @@ export async function pantryBoard(db: Database, householdId: string) {
     sealRates: rates,
     stockOverTime: stockSeries(lots.map(l => ({ at: l.shelvedAt, jars: l.jarsIn })), moved, now, zone),
     usedPerMonth: usedPerMonth(taken, now, zone),
-    jarsUsedPerMonth: jarsPerMonthByProduct(taken, now, zone),
+    jarsUsedPerMonth: eaten,
+    /** Months the Shelf lasts per product at that rate, for the board and the planner's jars-a-month mode. */
+    supply: monthsOfSupply(eaten, shelf.byProduct),
   }
 }

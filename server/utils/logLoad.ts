@@ -198,14 +198,15 @@ export async function updateLoad(db: Database, householdId: string, loadId: stri
 
 type LoadRow = typeof tables.canningLoads.$inferSelect
 
+/** A reprocessing run started after its deadline (CG "Reprocessing unsealed jars": within 24 hours). */
+const LATE_REPROCESS = { kind: 'under-processed' as const, message: 'Reprocessed more than 24 hours after the first unloading, later than the USDA Complete Guide allows. Do not shelve these jars: refrigerate and eat within several days.' }
+
 /** How a pending reprocessing load was run: it becomes a logged load with its seal reminder. */
 async function recordRun(db: Database, householdId: string, load: LoadRow, body: LoadUpdateInput, userId: string) {
   const required = load.requiredPsi !== null && load.requiredMinutes !== null ? { psi: load.requiredPsi, minutes: load.requiredMinutes } : null
   let shortfall = loadShortfall({ psi: body.pressurePsi!, minutes: body.processMinutes! }, required)
   const startedAt = new Date(body.startedAt!)
-  if (!shortfall && load.deadlineAt && startedAt > load.deadlineAt) {
-    shortfall = { kind: 'under-processed', message: 'Reprocessed more than 24 hours after the first unloading, later than the USDA Complete Guide allows. Do not shelve these jars: refrigerate and eat within several days.' }
-  }
+  if (!shortfall && load.deadlineAt && startedAt > load.deadlineAt) shortfall = LATE_REPROCESS
   const endedAt = new Date(body.endedAt!)
   await db.transaction(async (tx) => {
     const [done] = await tx.update(tables.canningLoads).set({
@@ -269,9 +270,15 @@ async function correctLoad(db: Database, householdId: string, load: LoadRow, bod
     if (why) badInput('lines', why)
   }
   const required = load.requiredPsi !== null && load.requiredMinutes !== null ? { psi: load.requiredPsi, minutes: load.requiredMinutes } : null
-  const shortfall = required && psi !== null && minutes !== null ? loadShortfall({ psi, minutes }, required) : load.shortfall
-  if (shortfall && !load.shortfall && check) {
-    refusal(`With ${psi} psi for ${minutes} minutes load ${code} would be under-processed, and its jars are already on the Shelf. Do not eat them: remove them from the Shelf (as jars that cannot be kept), then correct the log. Within 24 hours of unloading they could still be reprocessed.`, 'processMinutes')
+  let shortfall = required && psi !== null && minutes !== null ? loadShortfall({ psi, minutes }, required) : load.shortfall
+  if (!shortfall && load.deadlineAt && startedAt && startedAt > load.deadlineAt) shortfall = LATE_REPROCESS
+  // Once the seal check (or the decision on an under-processed load) has sent jars to the Shelf,
+  // the refrigerator or reprocessing, a correction may not turn the load safe or unsafe.
+  if (check && Boolean(shortfall) !== Boolean(load.shortfall)) {
+    if (shortfall) {
+      refusal(`With ${psi} psi for ${minutes} minutes load ${code} would be under-processed, and its jars have been checked and put away. Do not eat them: take them off the Shelf as a correction (they cannot be kept), then correct the log. Within 24 hours of unloading they could still be reprocessed.`, 'processMinutes')
+    }
+    refusal(`Load ${code} was under-processed and its jars have already gone to the refrigerator or to reprocessing; that decision stands, so the log cannot now say it got its full process.`, 'processMinutes')
   }
 
   const changes: string[] = []

@@ -161,6 +161,8 @@ const expectations: Record<string, Expectation> = {
   'DELETE /api/households/:id/canners/:cannerId': { access: 'owner', call: async () => ({ path: hh(`/canners/${await freshCanner()}`) }) },
   'GET /api/households/:id/jar-stock': { access: 'helper', call: () => ({ path: hh('/jar-stock') }) },
   'PUT /api/households/:id/jar-stock': { access: 'owner', call: () => ({ path: hh('/jar-stock'), body: { jarSizeId: 'quart-regular', count: 12 } }) },
+  'GET /api/households/:id/dry-goods': { access: 'helper', call: () => ({ path: hh('/dry-goods') }) },
+  'PUT /api/households/:id/dry-goods': { access: 'canner', call: () => ({ path: hh('/dry-goods'), body: { ingredientId: 'pinto-beans', grams: 907 } }) },
   'GET /api/households/:id/members': { access: 'helper', call: () => ({ path: hh('/members') }) },
   'PATCH /api/households/:id/members/:userId': { access: 'owner', call: () => ({ path: hh(`/members/${ids.cannerUser}`), body: { role: 'canner' } }) },
   // Removing someone else: owners only (leaving is anyone's, tested elsewhere). The owner
@@ -175,6 +177,7 @@ const expectations: Record<string, Expectation> = {
   'GET /api/households/:id/loads/export.csv': { access: 'helper', call: () => ({ path: hh('/loads/export.csv') }) },
   'GET /api/households/:id/loads/:loadId': { access: 'helper', call: () => ({ path: hh(`/loads/${ids.load}`) }) },
   'PATCH /api/households/:id/loads/:loadId': { access: 'canner', call: () => ({ path: hh(`/loads/${ids.load}`), body: { pressurePsi: 15, processMinutes: 75, startedAt: ago(22), endedAt: ago(20) } }) },
+  'DELETE /api/households/:id/loads/:loadId': { access: 'canner', call: async () => ({ path: hh(`/loads/${(await freshLoad()).id}`) }) },
   'POST /api/households/:id/loads/:loadId/photos': { access: 'canner', call: () => ({ path: hh(`/loads/${ids.load}/photos`), form: photoForm }) },
   'GET /api/households/:id/photos/:photoId': { access: 'helper', call: () => ({ path: hh(`/photos/${ids.photo}`) }) },
   'DELETE /api/households/:id/photos/:photoId': { access: 'canner', call: async () => ({ path: hh(`/photos/${await freshPhoto()}`) }) },

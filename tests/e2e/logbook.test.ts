@@ -168,13 +168,21 @@ describe('the seal check', () => {
     expect((await owner.post(api('/seal-checks'), { loadId: firstLoad.id, lines: [{ loadLineId: a!.id, sealed: 9, unsealed: 0 }, { loadLineId: b!.id, sealed: 9, unsealed: 0 }] })).status).toBe(409)
   })
 
-  it('records the reprocessing run, flags one short of the same process time, and will not rewrite a logged run', async () => {
+  it('records the reprocessing run, flags one short of the same process time, and a mistyped run can be corrected until its jars are decided', async () => {
     const short = await owner.patch(api(`/loads/${reprocessId}`), { pressurePsi: 15, processMinutes: 50, startedAt: ago(2), endedAt: ago(0.5) })
     expect(short.status).toBe(200)
     expect(short.body.shortfall.message).toMatch(/50 min instead of 75 min/)
     expect(short.body.status).toBe('done')
-    const again = await owner.patch(api(`/loads/${reprocessId}`), { pressurePsi: 15, processMinutes: 75, startedAt: ago(2), endedAt: ago(0.5) })
-    expect(again.status).toBe(422)
+    // Typed 50 for 75: the correction clears the flag (no jars have been decided on yet).
+    const corrected = await owner.patch(api(`/loads/${reprocessId}`), { processMinutes: 75 })
+    expect(corrected.status).toBe(200)
+    expect(corrected.body.shortfall).toBeNull()
+    // Back to 50, and the jars refrigerated as an under-processed load must be: that stands.
+    expect((await owner.patch(api(`/loads/${reprocessId}`), { processMinutes: 50 })).body.shortfall.kind).toBe('under-processed')
+    expect((await owner.post(api(`/loads/${reprocessId}/decision`), { action: 'refrigerate' })).status).toBe(200)
+    const undo = await owner.patch(api(`/loads/${reprocessId}`), { processMinutes: 75 })
+    expect(undo.status).toBe(422)
+    expect(undo.body.message).toMatch(/decision stands/)
   })
 
   it('keeps every jar of an under-processed load off the Shelf, sealed or not', async () => {

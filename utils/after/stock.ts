@@ -61,3 +61,22 @@ export function jarsPerMonthByProduct(
     .map(([key, g]) => ({ key, ...g, months: span, jarsPerMonth: Math.round((g.jars / span) * 10) / 10 }))
     .sort((a, b) => b.jarsPerMonth - a.jarsPerMonth || a.product.localeCompare(b.product))
 }
+
+/**
+ * Months the Shelf lasts at the household's rate, per product and jar size: jars on the shelf ÷
+ * jars eaten a month (to one decimal). Products on the shelf that nobody has eaten yet have no
+ * rate (null); products eaten but gone from the shelf have 0 months left.
+ */
+export function monthsOfSupply(
+  eaten: ReadonlyArray<{ key: string, product: string, recipeId: string | null, jarSizeId: string, jarsPerMonth: number }>,
+  onShelf: ReadonlyArray<{ product: string, jarSizeId: string, jars: number }>,
+): Array<{ key: string, product: string, recipeId: string | null, jarSizeId: string, jarsPerMonth: number | null, onShelf: number, monthsLeft: number | null }> {
+  const rows = eaten.map((e) => {
+    const jars = onShelf.filter(s => `${s.product}|${s.jarSizeId}` === e.key).reduce((sum, s) => sum + s.jars, 0)
+    return { ...e, onShelf: jars, monthsLeft: e.jarsPerMonth > 0 ? Math.round((jars / e.jarsPerMonth) * 10) / 10 : null }
+  })
+  const untouched = onShelf
+    .filter(s => !eaten.some(e => e.key === `${s.product}|${s.jarSizeId}`))
+    .map(s => ({ key: `${s.product}|${s.jarSizeId}`, product: s.product, recipeId: null, jarSizeId: s.jarSizeId, jarsPerMonth: null, onShelf: s.jars, monthsLeft: null }))
+  return [...rows.map(r => ({ key: r.key, product: r.product, recipeId: r.recipeId, jarSizeId: r.jarSizeId, jarsPerMonth: r.jarsPerMonth as number | null, onShelf: r.onShelf, monthsLeft: r.monthsLeft })), ...untouched]
+}
