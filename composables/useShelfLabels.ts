@@ -1,7 +1,8 @@
+import type { LabelQuery } from '~/utils/schemas/shelf'
 import { dataKeys } from '~/utils/dataKeys'
 
-/** Jar labels for the lots on the Shelf (all of them, or the lots named by id). */
-export function useShelfLabels(lots: Ref<string | undefined>) {
+/** Jar labels: the whole Shelf, the lots named by id, or one load's lots; one per jar left or a chosen count. */
+export function useShelfLabels(query: Ref<Partial<Record<keyof LabelQuery, string | number | undefined>>>) {
   const { id, options } = useHouseholdRead(dataKeys.labels)
-  return useFetch(() => `/api/households/${id.value}/shelf/labels` as const, { ...options, query: computed(() => ({ lots: lots.value })) })
+  return useFetch(() => `/api/households/${id.value}/shelf/labels` as const, { ...options, query })
 }
