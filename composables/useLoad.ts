@@ -40,5 +40,6 @@ export function useLoad(loadId: Ref<string>) {
     await $fetch(`/api/households/${id.value}/photos/${photoId}`, { method: 'DELETE' })
     await refreshNuxtData(key.value)
   }
-  return { ...load, update, remove, recordSealCheck, addPhoto, removePhoto }
+  // `settled`: the first read's end, for a page that answers 404 when the record is not there.
+  return { ...load, settled: load.then(() => undefined), update, remove, recordSealCheck, addPhoto, removePhoto }
 }

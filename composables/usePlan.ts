@@ -30,5 +30,6 @@ export function usePlan(planId: Ref<string | null | undefined>) {
     clearNuxtData(key.value)
     await refreshNuxtData(dataKeys.plans(id.value))
   }
-  return { ...plan, update, copy, remove }
+  // `settled`: the first read's end, for a page that answers 404 when the record is not there.
+  return { ...plan, settled: plan.then(() => undefined), update, copy, remove }
 }

@@ -20,5 +20,6 @@ export function useShelfLot(lotId: Ref<string>) {
     await $fetch<ShelfView>(`/api/households/${id.value}/shelf/undo`, { method: 'POST', body: { batchId } })
     await refreshNuxtData([key.value, ...others()])
   }
-  return { ...lot, takeOne, undo }
+  // `settled`: the first read's end, for a page that answers 404 when the record is not there.
+  return { ...lot, settled: lot.then(() => undefined), takeOne, undo }
 }

@@ -5,6 +5,8 @@ const linkPages = /^\/(invite|reset)\//
 /** Every screen but sign-in, create-account, forgotten password and e-mailed links needs a session; the server checks roles itself. */
 export default defineNuxtRouteMiddleware((to) => {
   const { loggedIn } = useUserSession()
+  // An address that is no page answers 404 for everyone, signed in or not.
+  if (to.matched.length === 0) return
   if (linkPages.test(to.path)) return
   if (publicPages.has(to.path)) {
     if (loggedIn.value) return navigateTo('/')

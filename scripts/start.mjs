@@ -2,6 +2,7 @@
 // Build and start Shelfstead on the embedded database (PGlite in .data/) with the demo household.
 // SHELFSTEAD_DEMO=0 starts without demo data; PORT and NUXT_DATA_DIR are honoured.
 import { spawn, spawnSync } from 'node:child_process'
+import { networkInterfaces } from 'node:os'
 import { resolve } from 'node:path'
 
 const env = {
@@ -27,6 +28,9 @@ while (Date.now() < deadline && server.exitCode === null) {
   try {
     if ((await fetch(`${url}/api/health`)).status === 200) {
       console.log(`\nShelfstead is ready: ${url}`)
+      // The server listens on every interface: a phone on the same network opens one of these.
+      const lan = Object.values(networkInterfaces()).flat().filter(a => a && a.family === 'IPv4' && !a.internal).map(a => `http://${a.address}:${env.PORT}`)
+      if (lan.length) console.log(`On a phone on the same network: ${lan.join('  or  ')}`)
       console.log(`Data: ${env.NUXT_DATA_DIR}`)
       if (env.SHELFSTEAD_DEMO !== '0') {
         console.log('Demo sign-ins (password put-up-2026):')

@@ -89,3 +89,14 @@ export function jarShortName(jarSizes: ReadonlyArray<{ id: string, name: string,
 export function percent(rate: number | null): string {
   return rate === null ? '—' : `${Math.round(rate * 100)}%`
 }
+
+/**
+ * A recipe picker's options: tested recipes first, then house recipes marked untested; a retired
+ * recipe only when `keep` names it (a line that already uses it, so the refusal can say why).
+ */
+export function recipeOptions(recipes: ReadonlyArray<{ id: string, name: string, status: string, retired?: string | null }>, keep?: string | null) {
+  return recipes
+    .filter(r => !r.retired || r.id === keep)
+    .toSorted((a, b) => Number(a.status === 'house') - Number(b.status === 'house'))
+    .map(r => ({ value: r.id, label: `${r.name}${r.status === 'house' ? ' (house, untested)' : ''}${r.retired ? ' (retired)' : ''}` }))
+}

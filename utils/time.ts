@@ -102,3 +102,12 @@ export function formatWallClock(iso: string, withDay = false): string {
 export function wallToInstant(iso: string, zone: string): Date {
   return /(?:Z|[+-]\d{2}:\d{2})$/.test(iso) ? new Date(iso) : fromZonedTime(iso.slice(0, 19), zone)
 }
+
+/** "5 h", "5 h 20 min", "45 min": a length of time in whole minutes, read the same on every screen. */
+export function formatDuration(minutes: number): string {
+  const whole = Math.max(0, Math.round(minutes))
+  const h = Math.floor(whole / 60)
+  const m = whole % 60
+  if (h === 0) return `${m} min`
+  return m === 0 ? `${h} h` : `${h} h ${m} min`
+}

@@ -97,6 +97,13 @@ export async function endSessionsOf(db: Db, userId: string, keep?: string) {
     .where(and(eq(tables.sessions.userId, userId), isNull(tables.sessions.endedAt), ...(keep ? [ne(tables.sessions.id, keep)] : [])))
 }
 
+/** Who may do a thing, in words: "Only a canner or the household's owner may do this; you are a helper." */
+const ROLE_REFUSAL: Record<Role, (role: Role) => string> = {
+  helper: role => `Only members of this household may do this; you are a ${role}.`,
+  canner: role => `Only a canner or the household's owner may do this; you are a ${role}.`,
+  owner: role => `Only the household's owner may do this; you are a ${role}.`,
+}
+
 /**
  * The person's role in a household. Not a member: 404 (ids leak nothing, for a site admin too:
  * the admin curates the shared recipes, not other households). A member working in another
@@ -113,7 +120,7 @@ export async function requireMembership(event: H3Event, householdId: string, min
     conflict('You are working in another household on this device. Switch to this one first (the household menu at the top).')
   }
   const role = membership.role
-  if (roleRank[role] < roleRank[minRole]) forbidden(`Only a household ${minRole} or above may do this; you are a ${role}.`)
+  if (roleRank[role] < roleRank[minRole]) forbidden(ROLE_REFUSAL[minRole](role))
   return { user, role, db, session }
 }
 

@@ -1,5 +1,6 @@
 import { and, eq, isNull, lte, sql } from 'drizzle-orm'
 import { loadCode, sealWindow } from '~~/utils/after'
+import { countOf } from '~~/utils/planning'
 import { formatDateTimeLong } from '~~/utils/time'
 import type { Database } from './database'
 
@@ -40,7 +41,7 @@ async function sealReminderMessage(db: Database, loadId: string) {
     + `<p>Its seal check is due now. Test the seals 12–24 hours after a load comes out: between ${escapeHtml(when(window.dueAt))} and ${escapeHtml(when(window.byAt))}. Remove the bands and press the middle of each lid; a lid that springs back has not sealed (USDA Complete Guide to Home Canning, “Testing jar seals”).</p>`
     + `<p>Unsealed jars: reprocess within 24 hours of unloading (by ${escapeHtml(when(window.reprocessBy))}) with a new lid and the same process time, or refrigerate them and eat within several days.</p>`
     + `<p><a href="${escapeHtml(link)}">Record the seal check</a></p>`
-  return { subject: `Seal check due: load ${code} (${lines.reduce((s, l) => s + l.jars, 0)} jars)`, text, html, householdId: load.householdId }
+  return { subject: `Seal check due: load ${code} (${countOf(lines.reduce((s, l) => s + l.jars, 0), 'jar')})`, text, html, householdId: load.householdId }
 }
 
 let running = false

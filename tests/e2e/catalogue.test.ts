@@ -135,6 +135,16 @@ describe('house recipes', () => {
     expectField(overfull, 'solidsFillFraction')
   })
 
+  // CG Guide 4: dried beans are soaked and boiled, then hot-packed; a raw pack is for fresh beans.
+  it('refuses a raw pack or a full-jar fill for dried beans (422, naming the field)', async () => {
+    const raw = await canner.post(`/api/households/${householdId}/recipes`, houseRecipe({ packStyle: 'raw' }))
+    expect(raw.status).toBe(422)
+    expectField(raw, 'packStyle', /fresh beans/)
+    const full = await canner.post(`/api/households/${householdId}/recipes`, houseRecipe({ solidsFillFraction: 1 }))
+    expect(full.status).toBe(422)
+    expectField(full, 'solidsFillFraction', /¾/)
+  })
+
   // Penn State Extension / NCHFP: a process time cannot be extended to a larger jar than was tested.
   it('refuses a jar size larger than the borrowed table covers (422)', async () => {
     const res = await canner.post(`/api/households/${householdId}/recipes`, houseRecipe({ jars: [{ sizeKey: 'half-gallon', saltTsp: 0 }] }))

@@ -110,8 +110,9 @@ describe('money that means something', () => {
     const res = await H.owner.post(H.api('/plans/preview'), { cannerId: H.cannerId, lines: [{ recipeId: 'usda-dried-beans-hot-pack', jarSizeId: 'quart-regular', ingredientId: 'pinto-beans', jars: 7 }] })
     expect(res.status).toBe(200)
     const { cost, lines } = res.body
-    // CG Guide 4: ¾ lb of dry beans a quart; 1 cup dry = 3 cups cooked (U.S. Dry Bean Council),
-    // more than a quart holds to its 1-inch headspace line, so the jar's contents to that line count.
+    // CG Guide 4: ¾ lb of dry beans a quart, soaked and boiled, then "fill jars with beans … leaving
+    // 1-inch headspace": 1 cup dry = 3 cups cooked (U.S. Dry Bean Council) is more than the jar holds,
+    // so the beans fill the quart (6.9 in tall in the jar catalogue) to its headspace line.
     const quart = { ml: convert(1).from('qt').to('ml'), heightMm: convert(6.9).from('in').to('mm') }
     const toHeadspace = quart.ml * (1 - 25.4 / quart.heightMm)
     expect(lines[0].perJar.dryMl * 3).toBeGreaterThan(toHeadspace)

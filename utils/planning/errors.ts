@@ -18,7 +18,8 @@ export class PlanningRefusal extends Error {
   }
 }
 
-export type WarningLevel = 'caution' | 'info'
+/** 'caution': a real hazard (untested recipe, gauge test due); 'reminder': the routine steps every load needs; 'info': worth knowing. */
+export type WarningLevel = 'caution' | 'reminder' | 'info'
 
 export interface PlanWarning {
   code: string
@@ -30,6 +31,11 @@ export interface PlanWarning {
 /** A safety point the canner must read. */
 export function caution(code: string, message: string, field?: string): PlanWarning {
   return field === undefined ? { code, level: 'caution', message } : { code, level: 'caution', message, field }
+}
+
+/** A routine step every load needs (headspace, venting, the altitude's pressure): shown calmly, so cautions stand out. */
+export function reminder(code: string, message: string, field?: string): PlanWarning {
+  return field === undefined ? { code, level: 'reminder', message } : { code, level: 'reminder', message, field }
 }
 
 /** A choice the planner made on the canner's behalf, or a figure worth knowing. */

@@ -36,6 +36,8 @@ export function volumeToHeadspaceMl(jar: JarSize, headspaceMm: number): number {
 
 export interface PerJarFill {
   dryMl: number
+  /** The beans once swollen (cooked, drained), in mL: what a hot pack fills and what a store can is compared with. */
+  hydratedMl: number
   dryGrams: number
   capMl: number
   /** dryMl ÷ capMl; above 1 only for a published amount (see `perJarFill`). */
@@ -154,11 +156,12 @@ export function perJarFill(
   )
   const saltTsp = request.saltTsp ?? recipeSalt?.value ?? 0
   const toLine = volumeToHeadspaceMl(jar, recipe.headspaceMm)
-  const solidsMl
-    = recipe.packStyle === 'dry'
-      ? dryMl
-      : Math.min(dryMl * ingredient.expansionRatio, recipe.solidsFillFraction * jar.capacityMl, toLine)
+  // The beans once swollen: E times the dry volume, never more than the solids' share f of the jar
+  // or the jar to its headspace line. A dry pack swells in the jar; a hot pack is packed swollen.
+  const hydratedMl = Math.min(dryMl * ingredient.expansionRatio, recipe.solidsFillFraction * jar.capacityMl, toLine)
+  const solidsMl = recipe.packStyle === 'dry' ? dryMl : hydratedMl
   return {
+    hydratedMl,
     dryMl,
     dryGrams: gramsForMl(dryMl, ingredient),
     capMl,

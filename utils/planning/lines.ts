@@ -9,7 +9,7 @@ import { pressureFor, processMinutesFor } from './process'
 import type { CannerLayout, LineResult } from './results'
 import { goodsForJars, jarsForAmount } from './scaling'
 import type { Canner, Catalogue, JarSize, PlanLineRequest, Recipe, UnitSystem } from './types'
-import { formatDry, formatLength, formatSalt, formatVolume, kitchenMeasure, mlToCups } from './units'
+import { formatCooked, formatDry, formatLength, formatSalt, formatVolume, kitchenMeasure, mlToCups } from './units'
 import { validateIngredient, validateJar, validateRecipe } from './validate'
 
 export interface LineContext {
@@ -111,7 +111,7 @@ export function planLine(line: PlanLineRequest, i: number, ctx: LineContext): Pl
     dryCups: kitchenMeasure(mlToCups(fill.dryMl), 'cup'),
     saltSpoons: fill.saltTsp > 0 ? kitchenMeasure(fill.saltTsp, 'tsp') : null,
   }
-  const { dryMl, dryGrams, saltTsp, saltGrams, waterMl } = fill
+  const { dryMl, dryGrams, saltTsp, saltGrams, waterMl, hydratedMl } = fill
   const result: LineResult = {
     lineIndex: i,
     recipeId: recipe.id,
@@ -119,7 +119,7 @@ export function planLine(line: PlanLineRequest, i: number, ctx: LineContext): Pl
     jarSizeId: jar.id,
     jarKey: jar.key,
     jars: amount.jars,
-    perJar: { dryGrams, dryMl, saltTsp, saltGrams, waterMl, display },
+    perJar: { dryGrams, dryMl, hydratedMl, saltTsp, saltGrams, waterMl, display: { ...display, cooked: formatCooked(hydratedMl, system) } },
     dryGramsTotal: goodsForJars(amount.jars, dryGrams),
     leftoverGrams: amount.leftoverGrams,
     partJar: amount.partJar,

@@ -6,7 +6,6 @@
  * and the day; buy what is missing; price the batch; add the standing cautions.
  */
 import { costSummary } from './cost'
-import { volumeToHeadspaceMl } from './fill'
 import { PlanningRefusal, info, type PlanWarning } from './errors'
 import { buildLoads } from './loads'
 import { planLine } from './lines'
@@ -158,13 +157,8 @@ export function planBatch(
   const measured = (household.jarsEatenPerMonth ?? [])
     .filter(e => planned.some(p => p.recipe.id === e.recipeId))
     .reduce((s, e) => s + e.jarsPerMonth, 0)
-  // The beans in a jar, for the store comparison: the dry volume swollen by the ingredient's
-  // expansion ratio, but never more than the jar holds up to its headspace line.
-  const beansPerJar = (l: LineResult): number => Math.min(
-    l.perJar.dryMl * (catalogue.ingredients.find(g => g.id === ingredientOf(l))?.expansionRatio ?? 1),
-    volumeToHeadspaceMl(jarOf(l.jarSizeId), l.headspaceMm),
-  )
-  const beansMl = sumBy(lines, l => l.jarSizeId, l => beansPerJar(l) * l.jars)
+  // The beans in a jar, for the store comparison: its swollen beans (fill.ts).
+  const beansMl = sumBy(lines, l => l.jarSizeId, l => l.perJar.hydratedMl * l.jars)
   const cost = costSummary(
     {
       jars: totalJars,
@@ -189,7 +183,7 @@ export function planBatch(
     ...planned.flatMap(p => p.warnings),
     ...loads.flatMap(l => (l.note ? [info('mixed-load', `Load ${l.index}: ${l.note}`)] : [])),
     ...shopping.warnings,
-    ...standingWarnings({ recipes, canners, loads, jarSizes: catalogue.jarSizes, feet: altitude.feet, today, system }),
+    ...standingWarnings({ recipes, canners, loads, feet: altitude.feet, today, system }),
   ]
   const kettleMl = lines.reduce((s, l) => s + l.waterMlTotal, 0)
   const cannersUsed = canners.filter(c => loads.some(l => l.cannerId === c.id))

@@ -17,6 +17,8 @@ export interface PerJarDisplay {
   salt: string
   water: string
   headspace: string
+  /** The swollen beans a hot pack fills: "1½ cups" or "355 mL". */
+  cooked: string
   dryCups: KitchenMeasure
   saltSpoons: KitchenMeasure | null
 }
@@ -31,6 +33,8 @@ export interface LineResult {
   perJar: {
     dryGrams: number
     dryMl: number
+    /** The beans once swollen (cooked, drained), mL. */
+    hydratedMl: number
     saltTsp: number
     saltGrams: number
     /** Boiling water (or cooking liquid) to the headspace line. */

@@ -142,6 +142,12 @@ export function formatDry(ml: number, grams: number, system: UnitSystem): string
   return `${kitchenMeasure(mlToCups(ml), 'cup').text} (${g})`
 }
 
+/** Cooked (swollen) beans per jar: "1½ cups" (US, a kitchen fraction) or "355 mL" (metric, to the nearest 5). */
+export function formatCooked(ml: number, system: UnitSystem): string {
+  if (system === 'metric') return `${grouped(Math.round(ml / 5) * 5)} mL`
+  return kitchenMeasure(mlToCups(ml), 'cup').text
+}
+
 /** Salt per jar: "½ tsp" (US) or "3 g (½ tsp)" (metric), or "no salt". */
 export function formatSalt(tsp: number, system: UnitSystem): string {
   if (tsp <= 0) return 'no salt'

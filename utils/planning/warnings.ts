@@ -2,24 +2,23 @@
  * The cautions every plan carries when they apply: untested practice, house recipes, gauge
  * tests, altitude adjustment, and the procedure points a canner must not skip.
  */
-import { caution, info, type PlanWarning } from './errors'
+import { caution, reminder, type PlanWarning } from './errors'
 import type { LoadResult } from './results'
 import { gaugeTestWarning, seaLevelPsi } from './process'
-import type { Canner, JarSize, Recipe, UnitSystem } from './types'
-import { formatLength, ML_PER_QUART } from './units'
+import type { Canner, Recipe, UnitSystem } from './types'
+import { formatLength } from './units'
 
 export interface StandingInput {
   recipes: readonly Recipe[]
   canners: readonly Canner[]
   loads: readonly LoadResult[]
-  jarSizes: readonly JarSize[]
   feet: number
   today: string
   system: UnitSystem
 }
 
-/** The cautions (and the store-comparison note) that apply to this plan, in a fixed order. */
-export function standingWarnings({ recipes, canners, loads, jarSizes, feet, today, system }: StandingInput): PlanWarning[] {
+/** The cautions and the routine reminders that apply to this plan, in a fixed order. */
+export function standingWarnings({ recipes, canners, loads, feet, today, system }: StandingInput): PlanWarning[] {
   const out: PlanWarning[] = []
   const dry = recipes.filter(r => r.packStyle === 'dry')
   if (dry.length) {
@@ -53,7 +52,7 @@ export function standingWarnings({ recipes, canners, loads, jarSizes, feet, toda
     )
     if (psi > base) {
       out.push(
-        caution(
+        reminder(
           'altitude-adjusted',
           `At ${feet.toLocaleString('en-US')} ft, process at ${psi} psi on the ${c.gaugeType} gauge of ${c.name}, `
           + `not the sea-level ${base} psi.`,
@@ -64,24 +63,12 @@ export function standingWarnings({ recipes, canners, loads, jarSizes, feet, toda
   })
   const headspaces = [...new Set(recipes.map(r => formatLength(r.headspaceMm, system)))]
   out.push(
-    caution(
+    reminder(
       'procedure',
       `Leave ${headspaces.join(' or ')} headspace. Vent steam for a full 10 minutes before pressurising, keep the `
       + 'pressure at or above the setting for the whole time, and let the canner cool to zero on its own — never '
       + 'force-cool it. When in doubt, follow current published guidance, your extension office and the canner’s manual.',
     ),
   )
-  const large = [...new Set(loads.map(l => l.jarSizeId))]
-    .map(id => jarSizes.find(j => j.id === id))
-    .filter((j): j is JarSize => j !== undefined && j.capacityMl > (ML_PER_QUART / 2) * 1.001)
-  if (large.length) {
-    out.push(
-      info(
-        'store-comparison',
-        `The store comparison counts one can per jar; a ${large[0]!.name} jar holds more than one can, `
-        + 'so the real saving is larger.',
-      ),
-    )
-  }
   return out
 }

@@ -43,6 +43,9 @@ export function houseCaution(note: string | null | undefined): string {
 const refusedField = (message: string) => z.never({ errorMap: () => ({ message }) }).optional()
 const BORROWED = 'A house recipe cannot set its own process time or pressure: they are copied from the tested recipe it is based on (basedOnRecipeId).'
 
+/** The most of a jar swollen dried beans may take (the planning model's f = ¾, computation.md §2). */
+export const DRY_BEANS_MAX_FILL = 0.75
+
 export const HouseRecipeSchema = z.object({
   name: z.string().trim().min(1, 'Name the recipe, for example "Dry-packed pintos".').max(80, 'Keep the name under 80 characters.'),
   basedOnRecipeId: z.string({ required_error: 'Choose the tested recipe whose process table this recipe borrows.', invalid_type_error: 'Choose the tested recipe whose process table this recipe borrows.' })
@@ -95,7 +98,7 @@ export function houseRecipeTables(
   catalogue: {
     recipes: readonly BaseRecipe[]
     jarSizes: ReadonlyArray<{ sizeKey: string, name: string, capacityMl: number }>
-    ingredients: ReadonlyArray<{ id: string }>
+    ingredients: ReadonlyArray<{ id: string, form?: string }>
   },
 ): HouseRecipeRefusal | { base: BaseRecipe, specs: Array<{ sizeKey: string, saltTsp: number | null, processMinutes: number | null }>, bands: BaseRecipe['pressureBands'] } {
   const { recipes, jarSizes, ingredients } = catalogue
@@ -104,8 +107,19 @@ export function houseRecipeTables(
     return { status: 400, issues: [{ field: 'basedOnRecipeId', message: 'Choose one of the shared tested recipes: a house recipe borrows its process time and pressure from one.' }] }
   }
   if (base.retired) return { status: 422, issues: [{ field: 'basedOnRecipeId', message: `${base.retired} Choose another tested recipe.` }] }
-  if (!ingredients.some(i => i.id === body.ingredientId)) {
+  const bean = ingredients.find(i => i.id === body.ingredientId)
+  if (!bean) {
     return { status: 400, issues: [{ field: 'ingredientId', message: 'That bean is not in the ingredient list.' }] }
+  }
+  if (bean.form === 'dry') {
+    // Dried beans are soaked and hot-packed (CG Guide 4) or, as household practice, dry-packed;
+    // a raw pack is for fresh beans, and swollen beans packed to the top leave no room for the heat.
+    if (body.packStyle === 'raw') {
+      return { status: 422, issues: [{ field: 'packStyle', message: 'Dried beans are not raw-packed: soak and boil them for a hot pack (USDA Complete Guide, Guide 4), or dry-pack them. Raw pack is for fresh beans.' }] }
+    }
+    if (body.solidsFillFraction > DRY_BEANS_MAX_FILL + 1e-9) {
+      return { status: 422, issues: [{ field: 'solidsFillFraction', message: 'Swollen dried beans may fill at most ¾ of the jar; packed tighter, the heat cannot reach the middle of the jar in the published time.' }] }
+    }
   }
   const unknown = body.jars.findIndex(j => !jarSizes.some(s => s.sizeKey === j.sizeKey))
   if (unknown >= 0) return { status: 400, issues: [{ field: `jars.${unknown}.sizeKey`, message: 'That jar size is not in the jar catalogue.' }] }

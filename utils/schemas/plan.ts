@@ -5,8 +5,8 @@ const positiveWhole = (what: string, max: number) =>
   z.number({ invalid_type_error: `Enter ${what} as a number.` }).int(`Enter ${what} as a whole number.`).positive(`${what[0]!.toUpperCase()}${what.slice(1)} must be more than 0.`).max(max, `That is more ${what} than one plan can hold (${max}).`)
 
 export const PackageSchema = z.object({
-  grams: z.number({ invalid_type_error: 'Enter the package size in grams.' }).positive('A package must weigh more than 0 g.').max(50_000, 'A package over 50 kg looks like a typing slip.'),
-  count: positiveWhole('packages', 200),
+  grams: z.number({ invalid_type_error: 'Enter the bag size in grams.' }).positive('A bag must weigh more than 0 g.').max(50_000, 'A bag over 50 kg looks like a typing slip.'),
+  count: positiveWhole('bags', 200),
 })
 
 /**
@@ -20,7 +20,7 @@ export const PlanLineSchema = z.object({
   ingredientId: z.string().min(1).optional(),
   jars: positiveWhole('jars', 500).optional(),
   dryGrams: z.number({ invalid_type_error: 'Enter the dry weight in grams.' }).positive('The dry weight must be more than 0.').max(500_000, 'That is more dry goods than one plan can hold (500 kg).').optional(),
-  packages: z.array(PackageSchema).min(1, 'Add at least one package.').max(10).optional(),
+  packages: z.array(PackageSchema).min(1, 'Add at least one bag.').max(10).optional(),
   jarsPerMonth: z.number({ invalid_type_error: 'Enter jars per month as a number.' }).positive('Jars per month must be more than 0.').max(200).optional(),
   months: positiveWhole('months', 36).optional(),
   jarsOnShelf: z.number().int('Enter whole jars.').min(0, 'Jars on the shelf cannot be negative.').max(5000).optional(),

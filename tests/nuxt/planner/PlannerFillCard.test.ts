@@ -13,6 +13,11 @@ const catalogue: Catalogue = {
     id: 'dry', name: 'Dry-packed beans', status: 'house', packStyle: 'dry', ingredientId: 'black', headspaceMm: 25.4,
     solidsFillFraction: 0.75, fillBasis: 'cap', perJar: [{ jarKey: 'pint', saltTsp: 0.25 }], processMinutes: [{ jarKey: 'pint', minutes: 75 }],
     pressureBands: [{ gaugeType: 'weighted', minFt: 0, maxFt: 1000, psi: 10 }], source: 'household practice',
+  }, {
+    // CG Guide 4: soaked and boiled beans, hot-packed; 3¼ lb of dry beans per 9 pints.
+    id: 'hot', name: 'Dried beans, hot pack', status: 'tested', packStyle: 'hot', ingredientId: 'black', headspaceMm: 25.4,
+    solidsFillFraction: 0.75, fillBasis: 'published', perJar: [{ jarKey: 'pint', dryGrams: convert(3.25).from('lb').to('g') / 9, saltTsp: 0.5 }],
+    processMinutes: [{ jarKey: 'pint', minutes: 75 }], pressureBands: [{ gaugeType: 'weighted', minFt: 0, maxFt: 1000, psi: 10 }], source: 'USDA CG Guide 4',
   }],
 }
 const household: HouseholdSettings = { altitudeFt: 500, unitSystem: 'us', storeCanPriceCents: 119, jarUses: 10, jarsOwned: [], prices: [] }
@@ -29,6 +34,16 @@ describe('per-jar fill card', () => {
     expect(wrapper.get('[data-testid="fill-salt"]').text()).toBe('¼ tsp')
     expect(wrapper.get('[role="meter"]').attributes('aria-valuenow')).toBe('100')
     expect(wrapper.text()).toContain('18 × Pint')
+  })
+
+  it('headlines a hot pack by the cooked beans that go in the jar, with the dry weight to buy beside it', async () => {
+    const plan = planBatch({ lines: [{ recipeId: 'hot', jarSizeId: 'pint', amount: { mode: 'jars', jars: 9 } }], canners: [canner], altitudeFt: 500, today: '2026-12-01' }, catalogue, household)
+    const wrapper = await mountSuspended(PlannerFillCard, { props: { line: plan.lines[0]!, jarName: 'Pint', unitSystem: 'us' } })
+    expect(wrapper.text()).toContain('Cooked beans per jar')
+    expect(wrapper.text()).not.toContain('Dry beans per jar')
+    // Swollen beans take at most ¾ of the pint (computation.md §2): 1½ cups.
+    expect(wrapper.get('[data-testid="fill-cooked"]').text()).toBe('1½ cups')
+    expect(wrapper.get('[data-testid="fill-dry"]').text()).toContain(`${Math.round(convert(3.25).from('lb').to('g') / 9)} g a jar`)
   })
 
   it('shows millilitres, not cups, for a metric household', async () => {

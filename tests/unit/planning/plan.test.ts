@@ -57,8 +57,8 @@ describe('the USDA hot pack, 9 pints (USDA Complete Guide (AIB 539) Guide 4)', (
     expect(r.shopping.find(s => s.kind === 'lid')).toMatchObject({ quantity: 9, cost: 399 })
     expect(r.shopping.some(s => s.kind === 'jar')).toBe(false)
   })
-  it('carries the procedure caution and no dry-pack or gauge-test caution', () => {
-    expect(codes(r)).toContain('procedure')
+  it('carries the procedure reminder (calm, not a caution) and no dry-pack or gauge-test caution', () => {
+    expect(r.warnings.find(w => w.code === 'procedure')?.level).toBe('reminder')
     expect(codes(r)).not.toContain('dry-pack-untested')
     expect(codes(r)).not.toContain('gauge-test-due')
     expect(r.warnings.findIndex(w => w.level === 'info')).toBeGreaterThan(r.warnings.findLastIndex(w => w.level === 'caution'))

@@ -43,12 +43,17 @@ describe('the store comparison is by equal volume of beans', () => {
     expect(r.cost.storeCansPerJar[0]!.cans).toBeCloseTo(1.5 / 1.75, 6)
   })
 
-  it('never counts more beans than the jar holds to its headspace line (the hot pack\'s published amount swells past it)', () => {
-    const r = planBatch(request([jars(usdaDryBeans.id, pint.id, 9)]), catalogue, household)
+  it('never counts more beans than the solids\' share of the jar: the hot pack\'s published amount swells past it', () => {
+    const r = planBatch(request([jars(usdaDryBeans.id, pint.id, 9), jars(usdaDryBeans.id, quart.id, 7)]), catalogue, household)
     // 164 g of black beans (194 g a cup) is 0.85 cup dry, 2.5 cups swollen: more than a pint holds.
-    const toHeadspace = pint.capacityMl * (1 - 25.4 / pint.heightMm)
-    expect(r.cost.storeCansPerJar[0]!.cans).toBeCloseTo(toHeadspace / cups(1.5), 6)
-    expect(toHeadspace).toBeLessThan(convert(1).from('pnt').to('ml'))
+    // The solids take at most ¾ of the jar (computation.md §2): 1½ cups a pint, 3 cups a quart —
+    // one and two 15-oz cans of drained beans (U.S. Dry Bean Council).
+    expect(r.lines[0]!.perJar.dryMl * 3).toBeGreaterThan(convert(2).from('cup').to('ml'))
+    expect(r.lines[0]!.perJar.hydratedMl).toBeCloseTo(0.75 * pint.capacityMl, 6)
+    expect(r.lines[0]!.perJar.display.cooked).toBe('1½ cups')
+    const perJar = Object.fromEntries(r.cost.storeCansPerJar.map(c => [c.jarSizeId, c.cans]))
+    expect(perJar[pint.id]).toBeCloseTo(1, 5)
+    expect(perJar[quart.id]).toBeCloseTo(2, 5)
   })
 })
 
