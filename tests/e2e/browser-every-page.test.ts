@@ -96,7 +96,9 @@ async function visit(page: Page, route: string, who: string): Promise<Visit> {
     await page.goto(`${server.url}${address(route)}`, { waitUntil: 'networkidle' })
     // Let late content (charts, client-only parts) settle before measuring.
     await page.waitForTimeout(300)
-    const size = await page.evaluate(() => ({ scrollWidth: document.documentElement.scrollWidth, innerWidth: window.innerWidth }))
+    // A phone's browser widens its layout viewport to fit wide content (innerWidth grows with it),
+    // so the page is measured against the 360 px screen itself.
+    const size = await page.evaluate(() => ({ scrollWidth: document.documentElement.scrollWidth, innerWidth: Math.min(window.innerWidth, window.screen.width) }))
     await screenshot(page, `every-page-${who}${route.replace(/[[\]]/g, '').replace(/\//g, '-') || '-board'}`)
     return { route, url: page.url(), ...size, errors: [...errors] }
   }
