@@ -130,7 +130,7 @@ describe('Recipe book and Household in Chromium', () => {
     await page.getByRole('button', { name: 'Add to price list' }).click()
     const saltRow = page.locator('tbody tr').filter({ hasText: 'Pickling salt, 2 lb bag' })
     expect(await visible(saltRow)).toBe(true)
-    expect((await saltRow.innerText()).replace(/\s+/g, ' ')).toContain('Salt 2 lb 2.50 1.25 / lb')
+    expect((await saltRow.innerText()).replace(/\s+/g, ' ')).toContain('Salt 2 lb $2.50 $1.25 / lb')
 
     await page.getByLabel('Quart, wide mouth').fill('4')
     await page.getByRole('button', { name: 'Save jar counts' }).click()

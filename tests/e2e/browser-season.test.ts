@@ -54,6 +54,20 @@ describe('the season on a phone', () => {
     await screenshot(page, 'season-1-market-list-phone')
   })
 
+  it('the Market list prints as the list alone, on one page', async () => {
+    const desk = await browser.newPage({ viewport: { width: 1280, height: 900 } })
+    await signIn(desk, server.url, 'canner@demo.shelfstead.test')
+    await desk.goto(`${server.url}/plans/${planId}/market`, { waitUntil: 'networkidle' })
+    await desk.emulateMedia({ media: 'print' })
+    // Nothing but the list and its total: no navigation, buttons or the e-mail form.
+    expect(await desk.getByRole('button', { name: 'Send the list' }).isVisible()).toBe(false)
+    expect(await desk.getByRole('navigation').first().isVisible().catch(() => false)).toBe(false)
+    const text = (await desk.pdf({ format: 'Letter', printBackground: true })).toString('latin1')
+    // Chromium writes its page objects uncompressed.
+    expect((text.match(/\/Type\s*\/Page(?![s\w])/g) ?? []).length).toBe(1)
+    await desk.close()
+  })
+
   it('a Logbook entry opens for correction with its own values, and the correction is kept', async () => {
     await page.goto(`${server.url}/logbook/${loadId}`, { waitUntil: 'networkidle' })
     await page.getByRole('button', { name: 'Correct this entry…' }).click()

@@ -148,6 +148,28 @@ describe('the Market list by e-mail', () => {
     expect(stranger.status).toBe(400)
     expectField(stranger, 'userId')
   })
+
+  it('says what is still unchecked: items checked off or at home move to "Already checked off"', async () => {
+    const server = running.at(-1)!
+    const client = new ApiClient(server.url)
+    const me = await client.login(EMAIL, PASSWORD)
+    const canners = (await client.get(`/api/households/${householdId}/canners`)).body
+    const saved = await client.post(`/api/households/${householdId}/plans`, {
+      name: 'Black beans, half checked',
+      request: { cannerId: canners[0].id, lines: [{ recipeId: 'usda-dried-beans-hot-pack', jarSizeId: 'pint-regular', ingredientId: 'black-beans', jars: 18 }] },
+    })
+    const shopping = saved.body.result.shopping as Array<{ item: string, key: string, kind: string }>
+    const salt = shopping.find(i => i.kind === 'salt')!
+    const beans = shopping.find(i => i.kind === 'ingredient')!
+    const market = `/api/households/${householdId}/plans/${saved.body.plan.id}/market`
+    expect((await client.put(market, { itemKey: salt.key, checked: true, state: 'at-home' })).status).toBe(200)
+    expect((await client.post(`/api/households/${householdId}/plans/${saved.body.plan.id}/send-market-list`, { userId: me.user.id })).status).toBe(202)
+    const message = await waitFor(async () => ((await client.get('/api/dev/outbox')).body as OutboxMessage[]).find(m => m.subject === 'Market list: Black beans, half checked'))
+    const mail = await simpleParser(message!.raw)
+    expect(mail.text).toContain(`- ${beans.item}: need`)
+    expect(mail.text).not.toContain(`- ${salt.item}: need`)
+    expect(mail.text).toContain(`Already checked off: ${salt.item}.`)
+  })
 })
 
 describe('development-only routes', () => {
