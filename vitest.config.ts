@@ -32,6 +32,8 @@ export default defineConfig({
           name: 'e2e',
           include: ['tests/e2e/**/*.test.ts'],
           environment: 'node',
+          // the PostgreSQL pass (SHELFSTEAD_TEST_DATABASE=postgres) starts one throwaway cluster
+          globalSetup: ['tests/support/postgres-global.ts'],
           testTimeout: 120_000,
           hookTimeout: 180_000,
           fileParallelism: false,

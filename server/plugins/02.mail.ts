@@ -2,7 +2,7 @@ import { mailMode, parseMessage, startFakeSmtp, stopFakeSmtp } from '../utils/ma
 import { useDB } from '../utils/database'
 import { serverSettings } from '../utils/settings'
 import { sendDueReminders } from '../utils/reminders'
-import { serverNow } from '../utils/clock'
+import { serverNow, syncClock } from '../utils/clock'
 
 /**
  * Mail at start-up: the local fake SMTP server when mail is in `fake` mode (development, demo,
@@ -29,7 +29,10 @@ export default defineNitroPlugin((nitroApp) => {
 
   const interval = serverSettings().reminderIntervalMs
   let timer: ReturnType<typeof setInterval> | undefined
-  const tick = () => useDB().then(db => sendDueReminders(db)).catch(error => console.error('[shelfstead] Reminder tick failed:', error))
+  const tick = () => useDB().then(async (db) => {
+    await syncClock(db)
+    return sendDueReminders(db)
+  }).catch(error => console.error('[shelfstead] Reminder tick failed:', error))
   if (mode !== 'off') {
     useDB().then(() => {
       tick()

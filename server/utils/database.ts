@@ -26,6 +26,12 @@ interface OpenDatabase {
   close: () => Promise<void>
 }
 
+/**
+ * Any number for the PostgreSQL advisory lock that app servers starting at once on one database
+ * take in turn, so migrations and seeding run once, whole, before the next server looks.
+ */
+const STARTUP_LOCK = 0x5E1F_57EA
+
 let opening: Promise<OpenDatabase> | undefined
 let ready = false
 
@@ -41,17 +47,29 @@ export function migrationsFolder(): string {
   return found
 }
 
-async function open(options: { dataDir: string, databaseUrl?: string }): Promise<OpenDatabase> {
+/** Open the database, and apply the migrations and `afterMigrate` (seeding) as one server at a time. */
+async function open(options: { dataDir: string, databaseUrl?: string }, afterMigrate: (db: Database) => Promise<void>): Promise<OpenDatabase> {
   const folder = migrationsFolder()
   if (options.databaseUrl) {
     const pool = new pg.Pool({ connectionString: options.databaseUrl })
     const db = drizzlePg(pool, { schema, casing: 'snake_case' })
-    await migratePg(db, { migrationsFolder: folder })
+    const holder = await pool.connect()
+    try {
+      await holder.query('select pg_advisory_lock($1)', [STARTUP_LOCK])
+      await migratePg(db, { migrationsFolder: folder })
+      await afterMigrate(db as unknown as Database)
+    }
+    finally {
+      await holder.query('select pg_advisory_unlock($1)', [STARTUP_LOCK]).catch(() => {})
+      holder.release()
+    }
     return { db: db as unknown as Database, close: () => pool.end() }
   }
+  // PGlite is one process's (the data-directory lock keeps out a second server).
   const client = await PGlite.create(join(options.dataDir, 'pglite'))
   const db = drizzlePglite(client, { schema, casing: 'snake_case' })
   await migratePglite(db, { migrationsFolder: folder })
+  await afterMigrate(db)
   return { db, close: () => client.close() }
 }
 
@@ -60,8 +78,7 @@ export function startDatabase(
   options: { dataDir: string, databaseUrl?: string },
   afterMigrate: (db: Database) => Promise<void>,
 ): Promise<OpenDatabase> {
-  opening ??= open(options).then(async (opened) => {
-    await afterMigrate(opened.db)
+  opening ??= open(options, afterMigrate).then((opened) => {
     ready = true
     return opened
   })

@@ -9,9 +9,9 @@
 import { mkdtempSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
-import { PGlite } from '@electric-sql/pglite'
 import { afterAll, describe, expect, it } from 'vitest'
 import { ApiClient, startServer, type RunningServer } from '../support/server'
+import { queryDatabase } from '../support/databases'
 
 const dataDir = mkdtempSync(join(tmpdir(), 'shelfstead-reference-'))
 const EMAIL = 'oda@example.org'
@@ -47,10 +47,8 @@ describe('reference corrections', () => {
     await first.stop()
 
     // Make this database look like one seeded by an older release with a wrong pint time.
-    const pg = await PGlite.create(join(dataDir, 'pglite'))
-    await pg.query(`update recipe_jar_specs set process_minutes = 70 where recipe_id = $1 and size_key = 'pint'`, [RECIPE])
-    await pg.query(`update reference_data set version = version - 1 where name = 'published'`)
-    await pg.close()
+    await queryDatabase(first, `update recipe_jar_specs set process_minutes = 70 where recipe_id = $1 and size_key = 'pint'`, [RECIPE])
+    await queryDatabase(first, `update reference_data set version = version - 1 where name = 'published'`)
 
     const second = await startServer({ dataDir })
     running.push(second)

@@ -10,7 +10,8 @@ afterAll(async () => { await Promise.all(started.map(s => s.stop())) })
 
 describe('start-up safety', () => {
   it('refuses a second server on the same data directory, naming the directory and the holding pid', async () => {
-    const first = await startServer()
+    // PGlite's data directory is what is locked (on a PostgreSQL server the server locks)
+    const first = await startServer({ env: { DATABASE_URL: '' } })
     started.push(first)
     const second = spawnSync(process.execPath, [serverEntry], {
       env: { ...process.env, NUXT_DATA_DIR: first.dataDir, PORT: '0', NUXT_SESSION_PASSWORD: '' },

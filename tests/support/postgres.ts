@@ -2,7 +2,7 @@ import { execFileSync, spawn, type ChildProcess } from 'node:child_process'
 import { chmodSync, existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
-import { freePort } from './server'
+import { freePort } from './ports'
 
 /** Debian's PostgreSQL server binaries (package postgresql), newest version first. */
 function postgresBin(): string {

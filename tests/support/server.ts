@@ -1,34 +1,33 @@
 import { expect } from 'vitest'
 import { spawn, type ChildProcess } from 'node:child_process'
 import { mkdtempSync } from 'node:fs'
-import { createServer } from 'node:net'
 import { tmpdir } from 'node:os'
 import { join, resolve } from 'node:path'
+import { freePort } from './ports'
+import { databaseFor } from './databases'
+
+export { freePort }
 
 export const serverEntry = resolve(process.env.SHELFSTEAD_OUTPUT_DIR || '.output', 'server/index.mjs')
 
 export interface RunningServer {
   url: string
   dataDir: string
+  /** The PostgreSQL database this server uses (the PostgreSQL pass, or a test's own), else PGlite. */
+  databaseUrl?: string
   process: ChildProcess
   output: () => string
   stop: () => Promise<void>
-}
-
-export async function freePort(): Promise<number> {
-  return new Promise((done, fail) => {
-    const probe = createServer()
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address()
-      probe.close(() => (typeof address === 'object' && address ? done(address.port) : fail(new Error('no port'))))
-    })
-  })
 }
 
 /** Start the built server (.output) on a free loopback port with its own data directory. */
 export async function startServer(options: { dataDir?: string, env?: Record<string, string> } = {}): Promise<RunningServer> {
   const dataDir = options.dataDir ?? mkdtempSync(join(tmpdir(), 'shelfstead-test-'))
   const port = await freePort()
+  // A test that sets DATABASE_URL itself (a URL, or '' for PGlite) decides; else this run's pass does.
+  const databaseUrl = options.env && 'DATABASE_URL' in options.env
+    ? options.env.DATABASE_URL || undefined
+    : await databaseFor(dataDir)
   let log = ''
   const child = spawn(process.execPath, [serverEntry], {
     env: {
@@ -42,6 +41,7 @@ export async function startServer(options: { dataDir?: string, env?: Record<stri
       // links in mail point where the test's browser already is (cookies are per host)
       SHELFSTEAD_PUBLIC_URL: `http://127.0.0.1:${port}`,
       ...options.env,
+      DATABASE_URL: databaseUrl ?? '',
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   })
@@ -62,6 +62,7 @@ export async function startServer(options: { dataDir?: string, env?: Record<stri
   return {
     url,
     dataDir,
+    databaseUrl,
     process: child,
     output: () => log,
     stop: () => new Promise<void>((done) => {

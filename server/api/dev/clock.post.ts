@@ -11,6 +11,6 @@ const BodySchema = z.object({
 export default defineEventHandler(async (event) => {
   if (!clockAdjustable()) notFound('Not found.')
   const body = await validBody(event, BodySchema)
-  setClockOffset(body.offsetMs)
+  await setClockOffset(await useDB(), body.offsetMs)
   return { now: serverNow(), offsetMs: clockOffsetMs() }
 })
