@@ -2,16 +2,25 @@
 // Benchmarks (never timed assertions in tests):
 //  1. the layout function for 1…40 jars per layer (vitest bench);
 //  2. the plan preview route against the health route of the same built server, with
-//     autocannon on 127.0.0.1, 10 connections for 10 s each; printed as a ratio.
+//     autocannon on 127.0.0.1, 10 connections for 10 s each; printed as a ratio;
+//  3. a mixed read/write load of many households at once (scripts/lib/load.mjs) on PGlite, and on
+//     a throwaway PostgreSQL cluster with two app servers; errors, lost writes (counted after),
+//     throughput and p50/p99 beside the bare health route of the same run. Exits non-zero on
+//     any error or lost write.
+//  --smoke: short durations (a check that the bench still runs), --no-build: use .output as is.
 import { spawn, spawnSync } from 'node:child_process'
 import { mkdtempSync } from 'node:fs'
 import { createServer } from 'node:net'
-import { tmpdir } from 'node:os'
 import { join, resolve } from 'node:path'
+import { cpus, tmpdir, totalmem } from 'node:os'
 import autocannon from 'autocannon'
+import { mixedLoad, startServers } from './lib/load.mjs'
+import { postgresBin, startPostgres } from './lib/postgres-cluster.mjs'
 
 const env = { ...process.env, NUXT_TELEMETRY_DISABLED: '1' }
 const output = resolve(env.SHELFSTEAD_OUTPUT_DIR || '.output')
+const smoke = process.argv.includes('--smoke')
+const seconds = smoke ? 2 : 10
 
 console.log('== Layout: one layer, 1…40 jars ==')
 const layout = spawnSync('npx', ['vitest', 'bench', '--run', '--project', 'unit', 'tests/bench/layout.bench.ts'], { stdio: 'inherit', env })
@@ -51,11 +60,11 @@ try {
       { recipeId: 'usda-dried-beans-hot-pack', jarSizeId: 'quart-regular', ingredientId: 'pinto-beans', packages: [{ grams: 907.18474, count: 3 }] },
     ],
   })
-  const run = opts => autocannon({ connections: 10, duration: 10, ...opts })
+  const run = opts => autocannon({ connections: 10, duration: seconds, ...opts })
   const preview = await run({ url: `${base}/api/households/${householdId}/plans/preview`, method: 'POST', headers: { cookie, 'content-type': 'application/json' }, body })
   const health = await run({ url: `${base}/api/health` })
   const row = (name, r) => `${name.padEnd(8)} ${r.requests.average.toFixed(0).padStart(7)} req/s   p50 ${String(r.latency.p50).padStart(4)} ms   p99 ${String(r.latency.p99).padStart(4)} ms   non-2xx ${r.non2xx}`
-  console.log('\n== HTTP (10 connections, 10 s each, 127.0.0.1) ==')
+  console.log(`\n== HTTP (10 connections, ${seconds} s each, 127.0.0.1) ==`)
   console.log(row('preview', preview))
   console.log(row('health', health))
   console.log(`preview / health throughput: ${(preview.requests.average / health.requests.average).toFixed(3)}`)
@@ -63,3 +72,41 @@ try {
 finally {
   server.kill('SIGTERM')
 }
+
+// 3. Mixed load with nothing lost.
+const loadOptions = smoke ? { households: 4, seconds: 3, maxRequests: 2_000 } : { households: 40, seconds: 30, maxRequests: 200_000 }
+const health = async url => autocannon({ url: `${url}/api/health`, connections: 10, duration: smoke ? 2 : 10 })
+const loadRow = (name, r, h) => `${name.padEnd(28)} ${String(r.households).padStart(4)} households  ${r.perSecond.toFixed(0).padStart(6)} req/s  p50 ${String(r.p50).padStart(4)} ms  p99 ${String(r.p99).padStart(5)} ms  ${String(r.requests).padStart(7)} requests  ${String(r.writes).padStart(6)} writes  errors ${r.errors}  lost ${r.lost}   | health ${h.requests.average.toFixed(0)} req/s, p50 ${h.latency.p50} ms, p99 ${h.latency.p99} ms`
+const rows = []
+let failed = false
+async function measure(name, servers) {
+  try {
+    const result = await mixedLoad(servers.urls, loadOptions)
+    const h = await health(servers.urls[0])
+    rows.push(loadRow(name, result, h))
+    if (result.errors || result.lost) {
+      failed = true
+      console.log(`${name}: ${result.errors} errors, ${result.lost} lost writes; first errors:\n  ${result.firstErrors.join('\n  ')}`)
+    }
+  }
+  finally {
+    await servers.stop()
+  }
+}
+await measure('PGlite, one server', await startServers(output))
+if (postgresBin()) {
+  const cluster = await startPostgres()
+  try {
+    await measure('PostgreSQL, two servers', await startServers(output, { count: 2, databaseUrl: cluster.url }))
+  }
+  finally {
+    await cluster.stop()
+  }
+}
+else {
+  console.log('PostgreSQL not installed (apt-get install postgresql): the two-server load was not run.')
+  failed = true
+}
+console.log(`\n== Mixed load, ${new Date().toISOString().slice(0, 10)}, ${cpus().length} cores, ${Math.round(totalmem() / 2 ** 30)} GiB, one request in flight per household, ${loadOptions.seconds} s ==`)
+for (const r of rows) console.log(r)
+if (failed) process.exit(1)

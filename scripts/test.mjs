@@ -6,8 +6,8 @@
 //   npm test -- <filters>    both passes, only the matching files (vitest filters)
 //   SHELFSTEAD_TEST_PASSES=pglite npm test    the first pass only (a quicker local run)
 import { spawnSync } from 'node:child_process'
-import { existsSync, mkdirSync, readdirSync, readFileSync } from 'node:fs'
-import { join } from 'node:path'
+import { mkdirSync, readFileSync } from 'node:fs'
+import { postgresBin } from './lib/postgres-cluster.mjs'
 
 const env = { ...process.env, NUXT_TELEMETRY_DISABLED: '1' }
 const run = (cmd, args, extraEnv = {}) => spawnSync(cmd, args, { stdio: 'inherit', env: { ...env, ...extraEnv } })
@@ -48,8 +48,7 @@ function pass(name, args, extraEnv) {
   return counts
 }
 
-const hasPostgres = existsSync('/usr/lib/postgresql')
-  && readdirSync('/usr/lib/postgresql').some(v => existsSync(join('/usr/lib/postgresql', v, 'bin', 'initdb')))
+const hasPostgres = Boolean(postgresBin())
 
 const results = []
 if (passes.includes('pglite')) results.push(pass('pglite', [], {}))

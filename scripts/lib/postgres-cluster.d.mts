@@ -1,0 +1,2 @@
+export function postgresBin(): string | undefined
+export function startPostgres(): Promise<{ url: string, stop: () => Promise<void> }>
