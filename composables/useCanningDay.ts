@@ -39,6 +39,11 @@ export function useCanningDay(planId: Ref<string>) {
   const refused = ref<string | null>(null)
   const skewMs = ref(0)
   const online = useOnline()
+  /**
+   * The last send failed for want of a connection. A phone may say it is online with no way
+   * through (a page opened again from the service worker, weak Wi-Fi): the day then says so too.
+   */
+  const sendFailed = ref(false)
   const queue = useStorage<QueuedAction[]>(() => `shelfstead-day-queue:${planId.value}`, [])
   const sending = ref(false)
   const tick = ref(Date.now())
@@ -93,9 +98,14 @@ export function useCanningDay(planId: Ref<string>) {
         try {
           receive(await $fetch<DayAnswer>(`${base()}/events`, { method: 'POST', body: { clientId: q.clientId, target: q.target, kind: q.kind, ...(fresh ? {} : { at: q.at }) } }))
           queue.value = queue.value.slice(1)
+          sendFailed.value = false
         }
         catch (error) {
-          if (!isReachable(error)) break
+          if (!isReachable(error)) {
+            sendFailed.value = true
+            break
+          }
+          sendFailed.value = false
           // Refused (another device moved the load first, or it came too late): drop it and say why.
           refused.value = apiError(error).message
           queue.value = queue.value.slice(1)
@@ -152,7 +162,7 @@ export function useCanningDay(planId: Ref<string>) {
     day,
     state,
     now,
-    online,
+    online: computed(() => online.value && !sendFailed.value),
     pending: computed(() => queue.value.length),
     loadError,
     refused,

@@ -118,6 +118,7 @@ describe('the Canning day on a phone', () => {
   })
 
   it('prints the Run sheet on at most two pages', async () => {
+    await ownerContext.setOffline(false) // whatever the test before left
     await owner.goto(`${server.url}/plans/${planId}/run`, { waitUntil: 'networkidle' })
     expect(await sideways(owner)).toBe(0)
     await screenshot(owner, 'day-5-run-sheet')
