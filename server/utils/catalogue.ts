@@ -1,4 +1,5 @@
 import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm'
+import { sharedReference } from './referenceCache'
 import { jarsPerMonthByProduct } from '~~/utils/after'
 import type { Canner, Catalogue, HouseholdSettings, PriceItem, Recipe, RecipePrep } from '~~/utils/planning'
 import type { Currency } from '~~/utils/vocabulary'
@@ -35,18 +36,24 @@ function prepOf(row: RecipeRow, basis: RecipeRow | undefined): RecipePrep | null
  * descriptive fields (source, summary, caution …) beside the planning fields.
  */
 export async function loadCatalogue(db: Database, householdId: string) {
-  const [recipeRows, jarRows, ingredientRows] = await Promise.all([
-    db.select().from(tables.recipes).where(visibleRecipes(householdId)).orderBy(asc(tables.recipes.status), asc(tables.recipes.name)),
-    db.select().from(tables.jarSizes).orderBy(asc(tables.jarSizes.sortOrder)),
-    db.select().from(tables.ingredients).orderBy(asc(tables.ingredients.name)),
+  // The published rows from memory (sharedReference checks their version); the house recipes read each time.
+  const [shared, houseRows] = await Promise.all([
+    sharedReference(db),
+    db.select().from(tables.recipes).where(eq(tables.recipes.householdId, householdId)),
   ])
-  const ids = recipeRows.map(r => r.id)
-  const [specs, bands] = ids.length
+  const houseIds = houseRows.map(r => r.id)
+  const [houseSpecs, houseBands] = houseIds.length
     ? await Promise.all([
-        db.select().from(tables.recipeJarSpecs).where(inArray(tables.recipeJarSpecs.recipeId, ids)),
-        db.select().from(tables.recipePressureBands).where(inArray(tables.recipePressureBands.recipeId, ids)),
+        db.select().from(tables.recipeJarSpecs).where(inArray(tables.recipeJarSpecs.recipeId, houseIds)),
+        db.select().from(tables.recipePressureBands).where(inArray(tables.recipePressureBands.recipeId, houseIds)),
       ])
     : [[], []]
+  const recipeRows = [...shared.recipes, ...houseRows]
+    .sort((a, b) => (a.status === b.status ? a.name.localeCompare(b.name) : a.status < b.status ? -1 : 1))
+  const specs = [...shared.specs, ...houseSpecs]
+  const bands = [...shared.bands, ...houseBands]
+  const jarRows = shared.jarSizes
+  const ingredientRows = shared.ingredients
 
   const recipes = recipeRows.map(row => ({
     ...row,
@@ -65,7 +72,7 @@ export async function loadCatalogue(db: Database, householdId: string) {
     jarSizes: jarRows.map(j => ({ ...j, key: j.sizeKey })),
     ingredients: ingredientRows.map(i => ({ ...i, source: i.gramsPerCupSource })),
   }
-  return { catalogue, recipes, jarSizes: jarRows, ingredients: ingredientRows }
+  return { catalogue, recipes, jarSizes: [...jarRows], ingredients: [...ingredientRows] }
 }
 
 export function toPlanningCanner(row: typeof tables.canners.$inferSelect): Canner {

@@ -64,6 +64,7 @@ async function sharedRecipe(tx: Tx, id: string) {
 export async function createSharedRecipe(db: Database, by: Actor, body: SharedRecipeBody) {
   return db.transaction(async (tx) => {
     await checkReferences(tx, body)
+    await libraryChanged(tx)
     const id = `library-${randomUUID()}`
     const now = serverNow()
     await tx.insert(tables.recipes).values({ id, householdId: null, status: 'tested', ...recipeColumns(body), createdBy: by.id, createdAt: now, updatedAt: now })
@@ -83,6 +84,7 @@ export async function updateSharedRecipe(db: Database, by: Actor, id: string, bo
     const row = await sharedRecipe(tx, id)
     if (row.status !== 'tested') refusal('Only tested recipes are edited here: a shared house recipe borrows its time and pressure from a tested one.')
     await checkReferences(tx, body)
+    await libraryChanged(tx)
     const before = await referenceValues(tx)
     await tx.update(tables.recipes).set({ ...recipeColumns(body), updatedAt: serverNow() }).where(eq(tables.recipes.id, id))
     await writeTables(tx, id, body)
@@ -103,6 +105,7 @@ export async function setRecipeRetired(db: Database, by: Actor, id: string, reti
     const row = await sharedRecipe(tx, id)
     if (retire && row.retiredAt) conflict('This recipe is already retired.')
     if (!retire && !row.retiredAt) conflict('This recipe is in the library already.')
+    await libraryChanged(tx)
     const before = await referenceValues(tx)
     await tx.update(tables.recipes).set({ retiredAt: retire ? serverNow() : null, retiredReason: retire ? reason : null, updatedAt: serverNow() })
       .where(eq(tables.recipes.id, id))

@@ -59,6 +59,7 @@ beforeAll(async () => {
     S3_SECRET_ACCESS_KEY: 'S3RVER',
     SHELFSTEAD_TEST_CLOCK: '1',
     SHELFSTEAD_REMINDER_INTERVAL_MS: '200',
+    SHELFSTEAD_ADMIN_EMAIL: 'keeper@example.org',
   }
   // Both at once on an empty database: migrations and seeding must run once, not race.
   servers.push(...await Promise.all([startServer({ env }), startServer({ env })]))
@@ -171,6 +172,27 @@ describe('two app servers on one PostgreSQL server', () => {
     await pause(2_000)
     expect(await reminders(cooling.body.code)).toBe(1)
     expect(await reminders(due.body.code)).toBe(1)
+  })
+
+  it('see a site admin\'s change to the shared library on the very next preview, whichever server made it', async () => {
+    const { api } = household
+    const admin = new ApiClient(servers[0]!.url)
+    expect((await admin.post('/api/auth/register', { email: 'keeper@example.org', password: 'library-keeper-2026', name: 'Ines Keeper', householdName: 'Keeper pantry' })).status).toBe(201)
+    // Each server has read the library (and keeps it in memory) before the change.
+    const asOwner = async (server: RunningServer) => {
+      const c = new ApiClient(server.url)
+      await c.login(household.email, household.password)
+      return c.request('POST', api('/plans/preview'), { cannerIds: [household.cannerId], lines: [{ recipeId: 'usda-baked-beans', jarSizeId: 'pint-regular', jars: 9 }] })
+    }
+    for (const server of servers) expect((await asOwner(server)).status).toBe(200)
+    expect((await admin.post('/api/recipes/usda-baked-beans/retire', { reason: 'Checking that every server hears of it' })).status).toBe(200)
+    const refused = await asOwner(servers[1]!)
+    expect(refused.status).toBe(422)
+    expect(refused.body.message).toMatch(/retired from the shared library/)
+    const restorer = new ApiClient(servers[1]!.url)
+    await restorer.login('keeper@example.org', 'library-keeper-2026')
+    expect((await restorer.post('/api/recipes/usda-baked-beans/restore', { reason: 'Back in the library' })).status).toBe(200)
+    expect((await asOwner(servers[0]!)).status).toBe(200)
   })
 
   it('store a photo in the S3 bucket through one server and serve the same bytes through the other', async () => {
