@@ -59,6 +59,7 @@ let original: Backup
 let file: string
 let jo: { email: string, password: string, id: string, ownHouseholdId: string }
 let formerMemberId: string
+let planId: string
 /** The data directory (photos) of the PostgreSQL site the household is restored into. */
 let pgDataDir: string
 let postgres: Awaited<ReturnType<typeof startPostgres>>
@@ -93,7 +94,10 @@ beforeAll(async () => {
   const canners = (await owner.get(hh('/canners'))).body as Array<{ id: string }>
   const plan = await owner.post(hh('/plans'), { name: 'Pintos for winter', request: { cannerId: canners[0]!.id, lines: [{ recipeId: 'usda-dried-beans-hot-pack', jarSizeId: 'pint-regular', jars: 7 }] } })
   expect(plan.status, JSON.stringify(plan.body)).toBe(201)
-  expect((await owner.post(hh(`/plans/${plan.body.plan.id}/day`))).status).toBe(200)
+  planId = plan.body.plan.id
+  expect((await owner.post(hh(`/plans/${planId}/day`))).status).toBe(200)
+  const heat = await owner.post(hh(`/plans/${planId}/day/events`), { clientId: crypto.randomUUID(), target: 'load:1', kind: 'start-heat' })
+  expect(heat.status, JSON.stringify(heat.body)).toBeLessThan(300)
   jo = { email: 'jo@example.org', password: 'jo-long-password-2026', ...(await joinAsHelper(owner, 'jo@example.org', 'jo-long-password-2026')) }
   formerMemberId = (await joinAsHelper(owner, 'pat@example.org', 'pat-long-password-2026')).id
   expect((await owner.delete(hh(`/members/${formerMemberId}`))).status).toBeLessThan(300)
@@ -115,7 +119,7 @@ describe('the household backup file', () => {
     expect(original.formatVersion).toBe(1)
     expect(original.migration.tag).toBe(journal.entries.at(-1)!.tag)
     expect(original.referenceVersion).toBe(REFERENCE_VERSION)
-    for (const table of ['households', 'users', 'memberships', 'canners', 'price_items', 'jar_stock', 'plans', 'canning_days', 'canning_loads', 'load_lines', 'seal_checks', 'load_photos', 'shelf_lots', 'shelf_movements', 'fridge_items', 'recipes', 'recipe_jar_specs', 'activity', 'invitations']) {
+    for (const table of ['households', 'users', 'memberships', 'canners', 'price_items', 'jar_stock', 'plans', 'canning_days', 'day_events', 'canning_loads', 'load_lines', 'seal_checks', 'load_photos', 'shelf_lots', 'shelf_movements', 'fridge_items', 'recipes', 'recipe_jar_specs', 'activity', 'invitations']) {
       expect(original.tables[table]?.length, table).toBeGreaterThan(0)
     }
     expect(original.tables.recipes!.every(r => r.household_id === householdId)).toBe(true)
@@ -155,6 +159,13 @@ describe('restoring a household', () => {
     const locked = restoreHousehold(file, { dataDir, databaseUrl: '' })
     expect(locked.status).toBe(1)
     expect(locked.out).toMatch(/in use by another Shelfstead server \(pid \d+\)/)
+    // The Canning day goes on where it stopped: a new action is stored after the restored ones.
+    expect((await client.post('/api/auth/household', { householdId })).status).toBe(200)
+    const next = await client.post(`/api/households/${householdId}/plans/${planId}/day/events`, { clientId: crypto.randomUUID(), target: 'load:1', kind: 'start-vent' })
+    expect(next.status, JSON.stringify(next.body)).toBeLessThan(300)
+    const events = (await download(server, 'owner@demo.shelfstead.test', householdId)).tables.day_events!
+    const restoredSeq = Math.max(...original.tables.day_events!.map(e => Number(e.seq)))
+    expect(events.find(e => e.kind === 'start-vent')!.seq as number).toBeGreaterThan(restoredSeq)
   })
 
   it('into an empty PostgreSQL database gives the same household, table by table', async () => {
@@ -182,10 +193,16 @@ describe('restoring a household', () => {
   })
 
   it('into a site that has the household refuses, names it, and changes nothing', async () => {
+    const client = new pg.Client({ connectionString: postgres.url })
+    await client.connect()
+    const count = async () => (await client.query('select (select count(*) from households)::int as h, (select count(*) from shelf_movements)::int as m')).rows[0]
+    const before = await count()
     const run = restoreHousehold(file, { dataDir: tmp('again'), databaseUrl: postgres.url })
+    const after = await count().finally(() => client.end())
     expect(run.status).toBe(1)
     expect(run.out).toContain(`This site already has the household “${original.household.name}”`)
     expect(run.out).toContain('nothing was changed')
+    expect(after).toEqual(before)
   })
 
   it('refuses a file from a newer Shelfstead, naming the format or the migration', () => {
