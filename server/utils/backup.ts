@@ -10,8 +10,9 @@ import { readFileSync } from 'node:fs'
 import { join } from 'node:path'
 import { sql, type SQL } from 'drizzle-orm'
 import type { Storage } from 'unstorage'
-import * as t from '../database/schema'
-import { REFERENCE_VERSION } from '../database/seed/reference'
+import * as t from '~~/server/database/schema'
+import { REFERENCE_VERSION } from '~~/server/database/seed/reference'
+import { serverNow } from './clock'
 import { migrationsFolder, type Db, type Database } from './database'
 import { householdTables, keyColumns, tableName, userColumns } from './backupTables'
 
@@ -104,7 +105,7 @@ export async function exportHousehold(database: Database, householdId: string, s
     return {
       format: BACKUP_FORMAT,
       formatVersion: BACKUP_FORMAT_VERSION,
-      madeAt: new Date().toISOString(),
+      madeAt: serverNow().toISOString(),
       migration: await currentMigration(tx),
       referenceVersion: await referenceVersionOf(tx),
       household: { id: String(household.id), name: String(household.name) },

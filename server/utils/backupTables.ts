@@ -5,7 +5,7 @@
  */
 import { is } from 'drizzle-orm'
 import { getTableConfig, PgTable } from 'drizzle-orm/pg-core'
-import * as t from '../database/schema'
+import * as t from '~~/server/database/schema'
 
 /** How a table's rows of one household are found. */
 export type BackupScope = 'household' | 'householdId' | 'houseRecipe' | 'members'

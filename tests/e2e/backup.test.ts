@@ -10,7 +10,7 @@ import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import pg from 'pg'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { REFERENCE_VERSION } from '../../server/database/seed/reference'
+import { REFERENCE_VERSION } from '~~/server/database/seed/reference'
 import { ApiClient, startServer, type RunningServer } from '../support/server'
 import { startPostgres } from '../support/postgres'
 

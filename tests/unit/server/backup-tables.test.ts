@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest'
 import { getTableConfig } from 'drizzle-orm/pg-core'
-import { householdTables, notHouseholdTables, schemaTables, tableName, userColumns } from '../../../server/utils/backupTables'
+import { householdTables, notHouseholdTables, schemaTables, tableName, userColumns } from '~~/server/utils/backupTables'
 
 const listed = householdTables.map(h => tableName(h.table))
 
