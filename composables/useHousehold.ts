@@ -5,7 +5,7 @@ import type { HouseholdSettingsInput } from '~/utils/schemas/household'
 
 export type HouseholdView = ApiAnswer<'/api/households/:id'>
 
-/** The active household's settings (name, altitude, units, store price) and saving them. */
+/** The active household's settings (name, altitude, units, store price), saving them, and its backup file. */
 export function useHousehold() {
   const auth = useAuth()
   const { id, options } = useHouseholdRead(dataKeys.household)
@@ -16,5 +16,7 @@ export function useHousehold() {
     await $fetch(`/api/households/${id.value}`, { method: 'PATCH', body: values })
     await Promise.all([refreshNuxtData(dataKeys.household(id.value)), auth.refresh()])
   }
-  return { id, household, units, save }
+  /** The household's backup file (owners); a plain download link, since the browser saves the answer. */
+  const backupHref = computed(() => `/api/households/${id.value}/backup`)
+  return { id, household, units, save, backupHref }
 }

@@ -155,6 +155,7 @@ const expectations: Record<string, Expectation> = {
   'PATCH /api/households/:id': { access: 'owner', call: () => ({ path: hh(''), body: { altitudeFt: 2500 } }) },
   'GET /api/households/:id/board': { access: 'helper', call: () => ({ path: hh('/board') }) },
   'GET /api/households/:id/activity': { access: 'owner', call: () => ({ path: hh('/activity') }) },
+  'GET /api/households/:id/backup': { access: 'owner', call: () => ({ path: hh('/backup') }) },
   'GET /api/households/:id/canners': { access: 'helper', call: () => ({ path: hh('/canners') }) },
   'POST /api/households/:id/canners': { access: 'owner', call: () => ({ path: hh('/canners'), body: { name: 'Another canner', innerDiameterMm: 300, usableHeightMm: 220, rackThicknessMm: 6, gaugeType: 'weighted', maxLayers: 1, waterDepthMm: 76 } }) },
   'PATCH /api/households/:id/canners/:cannerId': { access: 'owner', call: () => ({ path: hh(`/canners/${H.cannerId}`), body: { name: 'Big weighted canner' } }) },
