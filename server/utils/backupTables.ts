@@ -46,6 +46,8 @@ export const notHouseholdTables: Readonly<Record<string, string>> = {
   jar_sizes: 'published reference data, seeded by the app',
   ingredients: 'published reference data, seeded by the app',
   mail_outbox: 'the development mail fake\'s store',
+  rate_limits: 'sign-in attempts counted against guessing, kept for minutes, per address and not per household',
+  test_clock: 'the test clock\'s offset (tests and development only)',
 }
 
 /** The SQL name of a table. */
