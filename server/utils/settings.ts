@@ -23,6 +23,8 @@ export interface ServerSettings {
   dataDir: string | undefined
   databaseUrl: string | undefined
   migrationsDir: string | undefined
+  /** Where Nitro's node server listens: NITRO_PORT or PORT (3000), NITRO_HOST or HOST, NITRO_UNIX_SOCKET. */
+  listen: { port: number, host: string | undefined, socket: string | undefined }
   /** SHELFSTEAD_DEMO: on in development unless set, on with `npm start` and in tests. */
   demo: boolean
   mail: MailMode
@@ -55,6 +57,11 @@ export function readSettings(env: NodeJS.ProcessEnv, dev = Boolean(import.meta.d
     dataDir: env.NUXT_DATA_DIR ? resolve(env.NUXT_DATA_DIR) : undefined,
     databaseUrl: env.DATABASE_URL || undefined,
     migrationsDir: env.SHELFSTEAD_MIGRATIONS_DIR || undefined,
+    listen: {
+      port: integer(env.NITRO_PORT || env.PORT, 3000),
+      host: env.NITRO_HOST || env.HOST || undefined,
+      socket: env.NITRO_UNIX_SOCKET || undefined,
+    },
     demo,
     mail,
     mailFrom: env.MAIL_FROM || 'Shelfstead <shelfstead@localhost>',
@@ -84,6 +91,13 @@ export function readSettings(env: NodeJS.ProcessEnv, dev = Boolean(import.meta.d
     nowOffsetMs: offset === undefined || offset.trim() === '' || !Number.isFinite(Number(offset)) ? undefined : Number(offset),
   }
 }
+
+/**
+ * Free space a data directory needs at start: a new PGlite database takes about 41 MB, and an
+ * existing one needs room for its write-ahead log. Below this the server refuses to start
+ * rather than failing half-way through creating the database.
+ */
+export const minFreeBytes = { newDatabase: 64 * 1024 * 1024, existingDatabase: 16 * 1024 * 1024 }
 
 let current: ServerSettings | undefined
 
