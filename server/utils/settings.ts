@@ -35,6 +35,8 @@ export interface ServerSettings {
   /** SHELFSTEAD_PUBLIC_URL was given: links printed for phones (jar labels) use it rather than the address the page was opened at. */
   publicUrlSet: boolean
   reminderIntervalMs: number
+  /** Queued mail: the first retry after SHELFSTEAD_MAIL_RETRY_MS (30 s), doubling up to mailRetryMaxMs. */
+  mailRetryMs: number
   storage: 'fs' | 's3'
   s3: { endpoint?: string, bucket?: string, region: string, accessKeyId?: string, secretAccessKey?: string }
   /** SHELFSTEAD_TRUST_PROXY=1: behind a reverse proxy, read the client address from X-Forwarded-For. */
@@ -77,6 +79,7 @@ export function readSettings(env: NodeJS.ProcessEnv, dev = Boolean(import.meta.d
     publicUrl: (env.SHELFSTEAD_PUBLIC_URL || `http://localhost:${env.PORT || 3000}`).replace(/\/$/, ''),
     publicUrlSet: Boolean(env.SHELFSTEAD_PUBLIC_URL),
     reminderIntervalMs: Math.max(200, integer(env.SHELFSTEAD_REMINDER_INTERVAL_MS, 60_000)),
+    mailRetryMs: Math.max(100, integer(env.SHELFSTEAD_MAIL_RETRY_MS, 30_000)),
     storage: env.SHELFSTEAD_STORAGE?.toLowerCase() === 's3' ? 's3' : 'fs',
     s3: {
       endpoint: env.S3_ENDPOINT || undefined,
@@ -98,6 +101,10 @@ export function readSettings(env: NodeJS.ProcessEnv, dev = Boolean(import.meta.d
  * rather than failing half-way through creating the database.
  */
 export const minFreeBytes = { newDatabase: 64 * 1024 * 1024, existingDatabase: 16 * 1024 * 1024 }
+
+/** Queued mail waits at most an hour between attempts, and a claimed send is given back after 5 minutes (a crash mid-send). */
+export const mailRetryMaxMs = 60 * 60_000
+export const mailClaimMs = 5 * 60_000
 
 let current: ServerSettings | undefined
 
