@@ -16,7 +16,8 @@ export default defineNitroPlugin((nitroApp) => {
   const { databaseUrl, demo, listen } = serverSettings()
   let release: (() => void) | undefined
   try {
-    checkPortFree(listen)
+    // Under `nuxt dev` the dev server owns the port and Nitro does not listen on it.
+    if (!import.meta.dev) checkPortFree(listen)
     // PGlite is single-process; a real PostgreSQL server does its own locking.
     if (!databaseUrl) {
       release = lockDataDir(dataDir)
@@ -38,7 +39,7 @@ export default defineNitroPlugin((nitroApp) => {
     console.error(`[shelfstead] Cannot start: ${message}`)
     process.exit(1)
   }
-  exitOnListenError(listen)
+  if (!import.meta.dev) exitOnListenError(listen)
 
   startDatabase({ dataDir, databaseUrl }, async (db) => {
     await seedReference(db)
