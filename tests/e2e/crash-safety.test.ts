@@ -32,7 +32,7 @@ async function signIn(s: RunningServer) {
   return { client, hid: me.households[0]!.id }
 }
 
-/** Write loads and prices from two workers until the server dies; note every acknowledged id. */
+/** Write loads and prices from three workers until the server dies; note every acknowledged id. */
 async function writeUntilKilled(s: RunningServer, client: ApiClient, api: (p: string) => string, cannerId: string, round: number, ledger: Ledger) {
   let stopped = false
   let killSent = false
@@ -62,7 +62,7 @@ async function writeUntilKilled(s: RunningServer, client: ApiClient, api: (p: st
       }
     }
   }
-  const killAfter = 400 + Math.floor(Math.random() * 1200)
+  const killAfter = 800 + Math.floor(Math.random() * 2200)
   const killed = new Promise<void>(done => s.process.once('exit', () => {
     stopped = true
     done()
@@ -71,7 +71,7 @@ async function writeUntilKilled(s: RunningServer, client: ApiClient, api: (p: st
     killSent = true
     s.process.kill('SIGKILL')
   }, killAfter)
-  await Promise.all([worker(0), worker(1), killed])
+  await Promise.all([worker(0), worker(1), worker(2), killed])
   expect(s.process.signalCode).toBe('SIGKILL')
 }
 
