@@ -105,6 +105,11 @@ export const minFreeBytes = { newDatabase: 64 * 1024 * 1024, existingDatabase: 1
 /** Queued mail waits at most an hour between attempts, and a claimed send is given back after 5 minutes (a crash mid-send). */
 export const mailRetryMaxMs = 60 * 60_000
 export const mailClaimMs = 5 * 60_000
+/**
+ * How long one SMTP attempt may wait (nodemailer's own defaults are 2 and 10 minutes): a mail
+ * server that does not answer fails the attempt soon, and the queue retries it later.
+ */
+export const smtpTimeoutsMs = { connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 60_000 }
 
 let current: ServerSettings | undefined
 

@@ -78,6 +78,15 @@ describe('the mail server down', () => {
       expect(waited).toBeLessThan(expectedDelay(row.attempts) + 2_000)
     }
 
+    // the Outbox page shows it too, on a server that sends real mail
+    const page = await fetch(`${server.url}/dev/outbox`, { headers: { cookie: H.owner.cookieHeader } })
+    expect(page.status).toBe(200)
+    const html = await page.text()
+    expect(html).toContain('Waiting for the mail server')
+    expect(html).toContain('Market list: Navy beans while the mail is down')
+    expect(html).toMatch(/[2-9]\d* attempts/)
+    expect(html).toContain('Last error:')
+
     // a restart while the mail server is still down keeps the queue and its counts
     const before = market(await queue())!.attempts
     await server.stop()
