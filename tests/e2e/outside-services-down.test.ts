@@ -31,13 +31,13 @@ async function waitFor<T>(probe: () => Promise<T | undefined | false>, ms = 30_0
   throw new Error('waited in vain')
 }
 
-interface Queued { id: string, subject: string, to: string[], attempts: number, lastAttemptAt: string | null, nextAttemptAt: string, lastError: string | null, sentAt: string | null }
+interface Queued { id: string, subject: string, to: string[], attempts: number, lastAttemptAt: string | null, nextAttemptAt: string, lastError: string | null, sentAt: string | null, cancelledAt: string | null }
 const FIRST_RETRY_MS = 400
 /** The backoff the README promises: the first retry after SHELFSTEAD_MAIL_RETRY_MS, then doubling, at most an hour. */
 const expectedDelay = (attempts: number) => Math.min(3_600_000, FIRST_RETRY_MS * 2 ** (attempts - 1))
 
 describe('the mail server down', () => {
-  it('keeps a Market list and a seal-check reminder queued with their attempts, across a restart, and sends each once when it is back', async () => {
+  it('keeps a Market list and a seal-check reminder queued with their attempts, across a restart, sends each once when it is back, and drops a reminder whose check was recorded meanwhile', async () => {
     const smtpPort = await freePort() // nothing listens here until the mail server "comes back"
     const dataDir = mkdtempSync(join(tmpdir(), 'shelfstead-mail-down-'))
     const env = { DATABASE_URL: '', SMTP_URL: `smtp://127.0.0.1:${smtpPort}`, SHELFSTEAD_MAIL_RETRY_MS: String(FIRST_RETRY_MS), SHELFSTEAD_REMINDER_INTERVAL_MS: '200' }
@@ -53,6 +53,13 @@ describe('the mail server down', () => {
       pressurePsi: 15, processMinutes: 75, startedAt: ago(22), endedAt: ago(20),
     })
     expect(load.status).toBe(201)
+    // a second load whose seal check is recorded while its reminder waits: that reminder never goes out
+    const checkedLoad = await H.owner.post(H.api('/loads'), {
+      cannerId: H.cannerId,
+      lines: [{ recipeId: 'usda-dried-beans-hot-pack', jarSizeId: 'pint-regular', jars: 2, product: 'Navy beans' }],
+      pressurePsi: 15, processMinutes: 75, startedAt: ago(22), endedAt: ago(20),
+    })
+    expect(checkedLoad.status).toBe(201)
     const plan = await H.owner.post(H.api('/plans'), {
       name: 'Navy beans while the mail is down',
       request: { cannerId: H.cannerId, lines: [{ recipeId: 'usda-dried-beans-hot-pack', jarSizeId: 'pint-regular', ingredientId: 'navy-beans', jars: 9 }] },
@@ -65,10 +72,14 @@ describe('the mail server down', () => {
     const queue = async () => (await H.owner.get('/api/dev/mail-queue')).body as Queued[]
     const market = (rows: Queued[]) => rows.find(r => r.subject === 'Market list: Navy beans while the mail is down')
     const reminder = (rows: Queued[]) => rows.find(r => r.subject.startsWith(`Seal check due: load ${load.body.code}`))
+    const checkedReminder = (rows: Queued[]) => rows.find(r => r.subject.startsWith(`Seal check due: load ${checkedLoad.body.code}`))
     const failing = await waitFor(async () => {
       const rows = await queue()
-      return Boolean((market(rows)?.attempts ?? 0) >= 3 && (reminder(rows)?.attempts ?? 0) >= 2) && rows
+      return Boolean((market(rows)?.attempts ?? 0) >= 3 && (reminder(rows)?.attempts ?? 0) >= 2 && checkedReminder(rows)) && rows
     })
+    expect(checkedReminder(failing)?.sentAt).toBeNull()
+    const check = await H.owner.post(H.api('/seal-checks'), { loadId: checkedLoad.body.id, lines: [{ loadLineId: checkedLoad.body.lines[0].id, sealed: 2, unsealed: 0 }] })
+    expect(check.status, JSON.stringify(check.body)).toBe(201)
     for (const row of [market(failing)!, reminder(failing)!]) {
       expect(row.to).toEqual([who.email])
       expect(row.sentAt).toBeNull()
@@ -116,9 +127,12 @@ describe('the mail server down', () => {
       return Boolean(market(rows)?.sentAt && reminder(rows)?.sentAt) && rows
     })
     expect(market(delivered)!.lastError).toBeNull()
+    const dropped = await waitFor(async () => checkedReminder((await again.get('/api/dev/mail-queue')).body as Queued[])?.cancelledAt)
+    expect(dropped).toBeTruthy()
     await pause(2_000) // several more ticks: nothing goes out twice
     expect(received.filter(s => s === 'Market list: Navy beans while the mail is down')).toHaveLength(1)
     expect(received.filter(s => s.startsWith(`Seal check due: load ${load.body.code}`))).toHaveLength(1)
+    expect(received.filter(s => s.startsWith(`Seal check due: load ${checkedLoad.body.code}`))).toEqual([])
   })
 })
 
