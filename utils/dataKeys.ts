@@ -10,6 +10,7 @@ export const dataKeys = {
   jarSizes: 'jar-sizes',
   ingredients: 'ingredients',
   outbox: 'dev-outbox',
+  mailQueue: 'dev-mail-queue',
   household: (hid: Id) => `household:${hid}`,
   members: (hid: Id) => `members:${hid}`,
   invitations: (hid: Id) => `invitations:${hid}`,

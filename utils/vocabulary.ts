@@ -95,6 +95,10 @@ export const labelLayouts = ['sheet-30', 'a4-24', 'plain'] as const
 export type LabelLayout = (typeof labelLayouts)[number]
 export const reminderKinds = ['seal-check'] as const
 
+/** What a queued outgoing e-mail is (server/utils/mailQueue.ts): the mail that is retried until the mail server takes it. */
+export const queuedMailKinds = ['market-list', 'seal-check'] as const
+export type QueuedMailKind = (typeof queuedMailKinds)[number]
+
 export const imageTypes = ['image/jpeg', 'image/png', 'image/webp'] as const
 export type ImageType = (typeof imageTypes)[number]
 

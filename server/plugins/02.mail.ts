@@ -2,13 +2,15 @@ import { mailMode, parseMessage, startFakeSmtp, stopFakeSmtp } from '../utils/ma
 import { useDB } from '../utils/database'
 import { serverSettings } from '../utils/settings'
 import { sendDueReminders } from '../utils/reminders'
+import { deliverDueMail } from '../utils/mailQueue'
 import { serverNow, syncClock } from '../utils/clock'
 
 /**
  * Mail at start-up: the local fake SMTP server when mail is in `fake` mode (development, demo,
- * tests), and the reminder sender, which looks for due seal-check reminders every
- * SHELFSTEAD_REMINDER_INTERVAL_MS (60 s by default) and once as soon as the database is ready,
- * so reminders that fell due while the server was down go out after a restart.
+ * tests), and the mail tick, which every SHELFSTEAD_REMINDER_INTERVAL_MS (60 s by default) and
+ * once as soon as the database is ready queues the seal-check reminders that are due and sends
+ * the queued mail whose next attempt has come, so nothing waiting is lost to a restart or to a
+ * mail server that was down.
  */
 export default defineNitroPlugin((nitroApp) => {
   serverNow() // reads SHELFSTEAD_NOW_OFFSET_MS once, and says so when it is ignored
@@ -29,10 +31,13 @@ export default defineNitroPlugin((nitroApp) => {
 
   const interval = serverSettings().reminderIntervalMs
   let timer: ReturnType<typeof setInterval> | undefined
-  const tick = () => useDB().then(async (db) => {
-    await syncClock(db)
-    return sendDueReminders(db)
-  }).catch(error => console.error('[shelfstead] Reminder tick failed:', error))
+  const tick = () => useDB()
+    .then(async (db) => {
+      await syncClock(db)
+      await sendDueReminders(db)
+      await deliverDueMail(db)
+    })
+    .catch(error => console.error('[shelfstead] Mail tick failed:', error))
   if (mode !== 'off') {
     useDB().then(() => {
       tick()

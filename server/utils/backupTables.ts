@@ -29,6 +29,7 @@ export const householdTables: ReadonlyArray<{ table: PgTable, scope: BackupScope
   { table: t.sealChecks, scope: 'householdId' },
   { table: t.loadPhotos, scope: 'householdId' },
   { table: t.reminders, scope: 'householdId' },
+  { table: t.mailQueue, scope: 'householdId' },
   { table: t.canningDays, scope: 'householdId' },
   { table: t.dayEvents, scope: 'householdId' },
   { table: t.shelfLots, scope: 'householdId' },

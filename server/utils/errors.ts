@@ -56,8 +56,8 @@ export function refusal(message: string, field?: string): never {
 export function upstreamFailed(message: string): never {
   return fail(502, message)
 }
-export function unavailable(message: string): never {
-  return fail(503, message)
+export function unavailable(message: string, field?: string): never {
+  return fail(503, message, field)
 }
 
 /** Parse `input` with a zod schema; the first problem answers 400 with its field and message. */

@@ -160,6 +160,8 @@ export async function createLoad(db: Db, householdId: string, userId: string, bo
     })))
     await scheduleSealReminder(tx, householdId, load!.id, endedAt)
     if (body.planId) await settlePlanStatus(tx, householdId, body.planId)
+    // The Canning day records its own words for the load, in its own transaction.
+    if (!day) await recordActivity(tx, { householdId, userId, kind: 'load', summary: `Logged load ${loadCode(number)}`, detail: { loadId: load!.id } })
     return load!.id
   })
   return loadDetail(db, householdId, id)

@@ -2,7 +2,7 @@ import type { AddressInfo } from 'node:net'
 import nodemailer, { type Transporter } from 'nodemailer'
 import { SMTPServer } from 'smtp-server'
 import { simpleParser } from 'mailparser'
-import { serverSettings, type MailMode } from './settings'
+import { serverSettings, smtpTimeoutsMs, type MailMode } from './settings'
 
 /**
  * Outgoing mail.
@@ -87,12 +87,13 @@ async function getTransport(): Promise<Transporter> {
   }
   const smtp = serverSettings().smtp
   transport = smtp.url
-    ? nodemailer.createTransport(smtp.url)
+    ? nodemailer.createTransport({ url: smtp.url, ...smtpTimeoutsMs })
     : nodemailer.createTransport({
         host: smtp.host,
         port: smtp.port,
         secure: smtp.secure,
         auth: smtp.user ? { user: smtp.user, pass: smtp.pass } : undefined,
+        ...smtpTimeoutsMs,
       })
   return transport
 }

@@ -3,6 +3,7 @@ import { countOf } from '~~/utils/planning'
 import { formatMoney } from '~~/utils/display'
 import type { Database } from './database'
 import { computePlan, requirePlan } from './plans'
+import { deliverQueued, queueMail } from './mailQueue'
 
 /**
  * The Market list of a saved plan, sent to one member: what is still to buy (not yet checked
@@ -10,6 +11,7 @@ import { computePlan, requirePlan } from './plans'
  * already checked off named after it. Recomputed from current prices and stock.
  */
 export async function sendMarketList(db: Database, householdId: string, planId: string, userId: string, senderName: string) {
+  if (mailMode() === 'off') unavailable('E-mail is not set up on this server: give SMTP_URL (or SMTP_HOST) and MAIL_FROM.')
   const plan = await requirePlan(db, householdId, planId)
   const [[member], checks] = await Promise.all([
     db.select({ email: tables.users.email, name: tables.users.name })
@@ -64,9 +66,8 @@ export async function sendMarketList(db: Database, householdId: string, planId: 
       + `</tbody></table>`
       : '<p>Nothing left to buy.</p>')
     + `<p><strong>${escapeHtml(totalLine)}</strong></p>${doneLine ? `<p>${escapeHtml(doneLine)}</p>` : ''}<p>Lids are single-use: buy one new flat lid per jar. Bands are reused.</p><p><a href="${escapeHtml(link)}">Check items off as you shop</a></p>`
-  const sent = await sendMail({ to: [member.email], subject: `Market list: ${plan.name}`, text, html }).catch((error) => {
-    if ((error as { statusCode?: number }).statusCode) throw error
-    upstreamFailed(`The mail server did not take the message: ${(error as Error).message}`)
-  })
-  return { sentTo: member.email, items: toBuy.length, messageId: sent.messageId }
+  // Queued first, so a mail server that is down loses nothing: tried now, then retried with backoff.
+  const queuedId = await queueMail(db, { kind: 'market-list', householdId, to: [member.email], subject: `Market list: ${plan.name}`, text, html })
+  const delivery = await deliverQueued(db, queuedId)
+  return { sentTo: member.email, items: toBuy.length, delivered: delivery.sent }
 }

@@ -12,7 +12,11 @@ export async function savePhoto(db: Database, input: { householdId: string, load
   }
   const id = crypto.randomUUID()
   const key = `${input.householdId}:${id}.${imageExtension[type]}`
-  await usePhotoStorage().setItemRaw(key, input.bytes)
+  // The file first: a photo store that is down leaves no row pointing at a missing file.
+  await usePhotoStorage().setItemRaw(key, input.bytes).catch((error) => {
+    console.error('[shelfstead] Photo store refused an upload:', error)
+    unavailable('The photo store did not answer, so the photo was not saved. Try again in a moment.', 'photo')
+  })
   try {
     const [photo] = await db.insert(tables.loadPhotos).values({
       id, householdId: input.householdId, loadId: input.loadId, storageKey: key, contentType: type,
@@ -35,7 +39,10 @@ async function requirePhoto(db: Database, householdId: string, photoId: string) 
 
 export async function readPhoto(db: Database, householdId: string, photoId: string) {
   const photo = await requirePhoto(db, householdId, photoId)
-  const raw = await usePhotoStorage().getItemRaw(photo.storageKey)
+  const raw = await usePhotoStorage().getItemRaw(photo.storageKey).catch((error) => {
+    console.error('[shelfstead] Photo store did not answer a read:', error)
+    unavailable('The photo store did not answer. Try again in a moment.')
+  })
   if (!raw) notFound('The photo file is missing from storage.')
   const data = Buffer.isBuffer(raw) ? raw : Buffer.from(raw as ArrayBuffer)
   return { photo, data }
@@ -44,5 +51,6 @@ export async function readPhoto(db: Database, householdId: string, photoId: stri
 export async function deletePhoto(db: Database, householdId: string, photoId: string) {
   const photo = await requirePhoto(db, householdId, photoId)
   await db.delete(tables.loadPhotos).where(eq(tables.loadPhotos.id, photo.id))
-  await usePhotoStorage().removeItem(photo.storageKey)
+  // The row is gone, so nothing points at the file; a store that is down only leaves it behind.
+  await usePhotoStorage().removeItem(photo.storageKey).catch(error => console.error('[shelfstead] Photo file left in the store:', photo.storageKey, error))
 }

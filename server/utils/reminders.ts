@@ -3,6 +3,7 @@ import { loadCode, sealWindow } from '~~/utils/after'
 import { countOf } from '~~/utils/planning'
 import { formatDateTimeLong } from '~~/utils/time'
 import type { Database } from './database'
+import { queueMail } from './mailQueue'
 
 /** Who hears about a seal check: every member, helpers included (anyone may record it). */
 async function recipientsOf(db: Database, householdId: string): Promise<string[]> {
@@ -47,9 +48,10 @@ async function sealReminderMessage(db: Database, loadId: string) {
 let running = false
 
 /**
- * Send every reminder that is due. Each row is claimed first with a conditional update
- * (sent_at set only where it is still null), so two ticks, or a server restarted mid-way,
- * never send one twice; a failed send gives the claim back to be tried on a later tick.
+ * Hand every reminder that is due to the mail queue (server/utils/mailQueue.ts), which sends
+ * it and retries while the mail server is down. Each row is claimed with a conditional update
+ * (sent_at set only where it is still null) in the same transaction as its queued message, so
+ * two ticks, or a server restarted mid-way, never queue one twice.
  */
 export async function sendDueReminders(db: Database): Promise<number> {
   if (running) return 0
@@ -58,36 +60,27 @@ export async function sendDueReminders(db: Database): Promise<number> {
     const now = serverNow()
     const due = await db.select({ id: tables.reminders.id, loadId: tables.reminders.loadId })
       .from(tables.reminders)
-      .where(and(isNull(tables.reminders.sentAt), isNull(tables.reminders.cancelledAt), lte(tables.reminders.dueAt, now), sql`${tables.reminders.attempts} < 10`))
-    let sent = 0
+      .where(and(isNull(tables.reminders.sentAt), isNull(tables.reminders.cancelledAt), lte(tables.reminders.dueAt, now)))
+    let queued = 0
     for (const reminder of due) {
       const [checked] = await db.select({ id: tables.sealChecks.id }).from(tables.sealChecks).where(eq(tables.sealChecks.loadId, reminder.loadId))
       if (checked) {
         await db.update(tables.reminders).set({ cancelledAt: now }).where(eq(tables.reminders.id, reminder.id))
         continue
       }
-      const [claimed] = await db.update(tables.reminders)
-        .set({ sentAt: now, attempts: sql`${tables.reminders.attempts} + 1`, updatedAt: now })
-        .where(and(eq(tables.reminders.id, reminder.id), isNull(tables.reminders.sentAt)))
-        .returning()
-      if (!claimed) continue
-      try {
-        const message = await sealReminderMessage(db, reminder.loadId)
-        const to = message ? await recipientsOf(db, message.householdId) : []
-        if (!message || !to.length) {
-          await db.update(tables.reminders).set({ cancelledAt: now, lastError: 'Nobody to tell.' }).where(eq(tables.reminders.id, reminder.id))
-          continue
-        }
-        await sendMail({ to, subject: message.subject, text: message.text, html: message.html })
-        await db.update(tables.reminders).set({ recipients: to, lastError: null }).where(eq(tables.reminders.id, reminder.id))
-        sent++
-      }
-      catch (error) {
-        await db.update(tables.reminders).set({ sentAt: null, lastError: (error as Error).message }).where(eq(tables.reminders.id, reminder.id))
-        console.error('[shelfstead] Seal-check reminder not sent:', (error as Error).message)
-      }
+      const message = await sealReminderMessage(db, reminder.loadId)
+      const to = message ? await recipientsOf(db, message.householdId) : []
+      await db.transaction(async (tx) => {
+        const [claimed] = await tx.update(tables.reminders)
+          .set({ sentAt: now, attempts: sql`${tables.reminders.attempts} + 1`, updatedAt: now, ...(message && to.length ? { recipients: to } : { cancelledAt: now, lastError: 'Nobody to tell.' }) })
+          .where(and(eq(tables.reminders.id, reminder.id), isNull(tables.reminders.sentAt)))
+          .returning()
+        if (!claimed || !message || !to.length) return
+        await queueMail(tx, { kind: 'seal-check', householdId: message.householdId, reminderId: reminder.id, to, subject: message.subject, text: message.text, html: message.html })
+        queued++
+      })
     }
-    return sent
+    return queued
   }
   finally {
     running = false

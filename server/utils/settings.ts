@@ -23,6 +23,8 @@ export interface ServerSettings {
   dataDir: string | undefined
   databaseUrl: string | undefined
   migrationsDir: string | undefined
+  /** Where Nitro's node server listens: NITRO_PORT or PORT (3000), NITRO_HOST or HOST, NITRO_UNIX_SOCKET. */
+  listen: { port: number, host: string | undefined, socket: string | undefined }
   /** SHELFSTEAD_DEMO: on in development unless set, on with `npm start` and in tests. */
   demo: boolean
   mail: MailMode
@@ -33,6 +35,8 @@ export interface ServerSettings {
   /** SHELFSTEAD_PUBLIC_URL was given: links printed for phones (jar labels) use it rather than the address the page was opened at. */
   publicUrlSet: boolean
   reminderIntervalMs: number
+  /** Queued mail: the first retry after SHELFSTEAD_MAIL_RETRY_MS (30 s), doubling up to mailRetryMaxMs. */
+  mailRetryMs: number
   storage: 'fs' | 's3'
   s3: { endpoint?: string, bucket?: string, region: string, accessKeyId?: string, secretAccessKey?: string }
   /** SHELFSTEAD_TRUST_PROXY=1: behind a reverse proxy, read the client address from X-Forwarded-For. */
@@ -55,6 +59,11 @@ export function readSettings(env: NodeJS.ProcessEnv, dev = Boolean(import.meta.d
     dataDir: env.NUXT_DATA_DIR ? resolve(env.NUXT_DATA_DIR) : undefined,
     databaseUrl: env.DATABASE_URL || undefined,
     migrationsDir: env.SHELFSTEAD_MIGRATIONS_DIR || undefined,
+    listen: {
+      port: integer(env.NITRO_PORT || env.PORT, 3000),
+      host: env.NITRO_HOST || env.HOST || undefined,
+      socket: env.NITRO_UNIX_SOCKET || undefined,
+    },
     demo,
     mail,
     mailFrom: env.MAIL_FROM || 'Shelfstead <shelfstead@localhost>',
@@ -70,6 +79,7 @@ export function readSettings(env: NodeJS.ProcessEnv, dev = Boolean(import.meta.d
     publicUrl: (env.SHELFSTEAD_PUBLIC_URL || `http://localhost:${env.PORT || 3000}`).replace(/\/$/, ''),
     publicUrlSet: Boolean(env.SHELFSTEAD_PUBLIC_URL),
     reminderIntervalMs: Math.max(200, integer(env.SHELFSTEAD_REMINDER_INTERVAL_MS, 60_000)),
+    mailRetryMs: Math.max(100, integer(env.SHELFSTEAD_MAIL_RETRY_MS, 30_000)),
     storage: env.SHELFSTEAD_STORAGE?.toLowerCase() === 's3' ? 's3' : 'fs',
     s3: {
       endpoint: env.S3_ENDPOINT || undefined,
@@ -84,6 +94,22 @@ export function readSettings(env: NodeJS.ProcessEnv, dev = Boolean(import.meta.d
     nowOffsetMs: offset === undefined || offset.trim() === '' || !Number.isFinite(Number(offset)) ? undefined : Number(offset),
   }
 }
+
+/**
+ * Free space a data directory needs at start: a new PGlite database takes about 41 MB, and an
+ * existing one needs room for its write-ahead log. Below this the server refuses to start
+ * rather than failing half-way through creating the database.
+ */
+export const minFreeBytes = { newDatabase: 64 * 1024 * 1024, existingDatabase: 16 * 1024 * 1024 }
+
+/** Queued mail waits at most an hour between attempts, and a claimed send is given back after 5 minutes (a crash mid-send). */
+export const mailRetryMaxMs = 60 * 60_000
+export const mailClaimMs = 5 * 60_000
+/**
+ * How long one SMTP attempt may wait (nodemailer's own defaults are 2 and 10 minutes): a mail
+ * server that does not answer fails the attempt soon, and the queue retries it later.
+ */
+export const smtpTimeoutsMs = { connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 60_000 }
 
 let current: ServerSettings | undefined
 

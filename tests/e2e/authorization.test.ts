@@ -142,6 +142,7 @@ const expectations: Record<string, Expectation> = {
   'GET /api/dev/clock': { access: 'public', everyone: 404, call: () => ({ path: '/api/dev/clock' }) },
   'POST /api/dev/clock': { access: 'public', everyone: 404, call: () => ({ path: '/api/dev/clock', body: { offsetMs: 0 } }) },
   'GET /api/dev/outbox': { access: 'session', call: () => ({ path: '/api/dev/outbox' }) },
+  'GET /api/dev/mail-queue': { access: 'session', call: () => ({ path: '/api/dev/mail-queue' }) },
   'GET /api/ingredients': { access: 'session', call: () => ({ path: '/api/ingredients' }) },
   'GET /api/jar-sizes': { access: 'session', call: () => ({ path: '/api/jar-sizes' }) },
   'GET /api/recipes': { access: 'helper', call: () => ({ path: `/api/recipes?householdId=${H.id}` }) },

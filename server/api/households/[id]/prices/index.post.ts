@@ -7,8 +7,12 @@ export default defineEventHandler(async (event) => {
   const columns = priceColumns(body)
   const unknown = unknownReference(columns, await loadCatalogue(db, id))
   if (unknown) badInput(unknown.field, unknown.message)
-  const [item] = await db.insert(tables.priceItems).values({ ...columns, householdId: id }).returning()
-  await recordActivity(db, { householdId: id, userId: user.id, kind: 'price', summary: `Added a ${item!.kind} price` })
+  // The price and its activity row together, so a crash between them leaves neither half.
+  const item = await db.transaction(async (tx) => {
+    const [row] = await tx.insert(tables.priceItems).values({ ...columns, householdId: id }).returning()
+    await recordActivity(tx, { householdId: id, userId: user.id, kind: 'price', summary: `Added a ${row!.kind} price` })
+    return row!
+  })
   setResponseStatus(event, 201)
   return item
 })
