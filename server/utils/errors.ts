@@ -1,6 +1,7 @@
 import type { H3Event } from 'h3'
 import type { ZodType, ZodTypeDef } from 'zod'
 import type { ApiErrorData, ApiIssue } from '~~/utils/schemas/errors'
+import { findTextProblem } from '~~/utils/schemas/text'
 
 /**
  * The one error envelope of the API. Every refusal a route or server util makes goes through
@@ -36,6 +37,10 @@ export function notFound(message: string): never {
 export function conflict(message: string, field?: string): never {
   return fail(409, message, field)
 }
+/** 408: the request body stopped arriving (or took too long). */
+export function timedOut(message: string, field?: string): never {
+  return fail(408, message, field)
+}
 /** 413: too large to take. */
 export function tooLarge(message: string, field?: string): never {
   return fail(413, message, field)
@@ -60,8 +65,14 @@ export function unavailable(message: string): never {
   return fail(503, message)
 }
 
-/** Parse `input` with a zod schema; the first problem answers 400 with its field and message. */
+/**
+ * Parse `input` with a zod schema; the first problem answers 400 with its field and message.
+ * A control character anywhere in the input (or a hostile depth) is refused first, whatever
+ * the schema, so none reaches the database.
+ */
 function parseOr400<T>(schema: ZodType<T, ZodTypeDef, unknown>, input: unknown): T {
+  const text = findTextProblem(input)
+  if (text) badInput(text.field, text.message)
   const result = schema.safeParse(input)
   if (result.success) return result.data
   const issues = result.error.issues.map(i => ({ field: i.path.join('.'), message: i.message }))
