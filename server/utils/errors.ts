@@ -2,6 +2,7 @@ import type { H3Event } from 'h3'
 import type { ZodType, ZodTypeDef } from 'zod'
 import type { ApiErrorData, ApiIssue } from '~~/utils/schemas/errors'
 import { findTextProblem } from '~~/utils/schemas/text'
+import { houseErrorMap } from '~~/utils/schemas/z'
 
 /**
  * The one error envelope of the API. Every refusal a route or server util makes goes through
@@ -73,9 +74,11 @@ export function unavailable(message: string): never {
 function parseOr400<T>(schema: ZodType<T, ZodTypeDef, unknown>, input: unknown): T {
   const text = findTextProblem(input)
   if (text) badInput(text.field, text.message)
-  const result = schema.safeParse(input)
+  // The house map passed here too: the bundler may hoist `z` from 'zod' past the module that sets it.
+  const result = schema.safeParse(input, { errorMap: houseErrorMap })
   if (result.success) return result.data
-  const issues = result.error.issues.map(i => ({ field: i.path.join('.'), message: i.message }))
+  // An issue with the body itself (a number, a list, null where an object belongs) names "body".
+  const issues = result.error.issues.map(i => ({ field: i.path.join('.') || 'body', message: i.message }))
   const first = issues.find(i => i.field) ?? issues[0]!
   return badInput(first.field, first.message, issues)
 }
