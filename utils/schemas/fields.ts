@@ -46,3 +46,9 @@ export function inPlausibleYears(iso: string): boolean {
   return year >= PLAUSIBLE_YEARS.first && year <= PLAUSIBLE_YEARS.last
 }
 export const PLAUSIBLE_YEARS_MESSAGE = `Give a date between the years ${PLAUSIBLE_YEARS.first} and ${PLAUSIBLE_YEARS.last}.`
+
+/** A YYYY-MM-DD that is a day of the calendar (JavaScript reads "2026-02-30" as 2 March). */
+export function isCalendarDate(iso: string): boolean {
+  const ms = Date.parse(`${iso}T00:00:00Z`)
+  return !Number.isNaN(ms) && new Date(ms).toISOString().slice(0, 10) === iso
+}
