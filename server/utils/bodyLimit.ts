@@ -24,10 +24,23 @@ export function bodyKindFor(path: string): BodyKind {
   return routes.find(([pattern]) => pattern.test(pathname))?.[1] ?? kinds.json
 }
 
-/** Refusals end the connection: the rest of an unread body is never read. */
-function refuse(event: H3Event, refusal: () => never): never {
-  setResponseHeader(event, 'connection', 'close')
-  event.node.res.once('finish', () => event.node.req.socket?.end())
+/** How long the rest of a refused body is let in (and dropped) so the sender reads the answer. */
+const LINGER_MS = 5_000
+
+/**
+ * A refusal. Too large: what is still coming is dropped unread (never held) for at most
+ * `LINGER_MS`, then the connection ends; closing at once would reset it under a sender still
+ * writing, and it would never see the 413. Stalled: the connection ends with the answer.
+ */
+function refuse(event: H3Event, refusal: () => never, then: 'linger' | 'close'): never {
+  const { req, res } = event.node
+  if (then === 'close') setResponseHeader(event, 'connection', 'close')
+  else {
+    res.once('finish', () => {
+      const cut = setTimeout(() => req.socket?.destroy(), LINGER_MS).unref()
+      req.once('end', () => clearTimeout(cut)).resume()
+    })
+  }
   return refusal()
 }
 
@@ -42,27 +55,27 @@ export function readBodyWithin(event: H3Event): Promise<Buffer> | undefined {
   const chunked = /\bchunked\b/i.test(String(req.headers['transfer-encoding'] ?? ''))
   if (!chunked && (!declared || Number(declared) === 0)) return undefined
   const kind = bodyKindFor(event.path)
-  if (Number(declared) > kind.bytes) refuse(event, () => tooLarge(kind.tooLarge, kind.field))
+  if (Number(declared) > kind.bytes) refuse(event, () => tooLarge(kind.tooLarge, kind.field), 'linger')
 
   return new Promise<Buffer>((resolve, reject) => {
     const chunks: Buffer[] = []
     let size = 0
     let done = false
-    const stall = () => setTimeout(() => fail(() => timedOut('The request stopped arriving before it was complete; send it again.', kind.field)), BODY_LIMITS.idleMs)
+    const stall = () => setTimeout(() => fail(() => timedOut('The request stopped arriving before it was complete; send it again.', kind.field), 'close'), BODY_LIMITS.idleMs)
     let idle = stall()
-    const total = setTimeout(() => fail(() => timedOut('The request took too long to arrive; send it again on a steadier connection.', kind.field)), BODY_LIMITS.totalMs)
+    const total = setTimeout(() => fail(() => timedOut('The request took too long to arrive; send it again on a steadier connection.', kind.field), 'close'), BODY_LIMITS.totalMs)
     function settle() {
       done = true
       clearTimeout(idle)
       clearTimeout(total)
       req.off('data', onData).off('end', onEnd).off('error', onError).off('close', onClose)
     }
-    function fail(refusal: () => never) {
+    function fail(refusal: () => never, then: 'linger' | 'close') {
       if (done) return
       settle()
       req.pause()
       try {
-        refuse(event, refusal)
+        refuse(event, refusal, then)
       }
       catch (error) {
         reject(error)
@@ -70,7 +83,7 @@ export function readBodyWithin(event: H3Event): Promise<Buffer> | undefined {
     }
     function onData(chunk: Buffer) {
       size += chunk.byteLength
-      if (size > kind.bytes) return fail(() => tooLarge(kind.tooLarge, kind.field))
+      if (size > kind.bytes) return fail(() => tooLarge(kind.tooLarge, kind.field), 'linger')
       chunks.push(chunk)
       clearTimeout(idle)
       idle = stall()
@@ -80,8 +93,9 @@ export function readBodyWithin(event: H3Event): Promise<Buffer> | undefined {
       settle()
       resolve(Buffer.concat(chunks))
     }
-    const onError = () => fail(() => badInput(kind.field, 'The request was cut off before it was complete; send it again.'))
-    const onClose = () => fail(() => badInput(kind.field, 'The request was cut off before it was complete; send it again.'))
+    const cutOff = () => fail(() => badInput(kind.field, 'The request was cut off before it was complete; send it again.'), 'close')
+    const onError = cutOff
+    const onClose = cutOff
     req.on('data', onData).on('end', onEnd).on('error', onError).on('close', onClose)
   })
 }
