@@ -2,7 +2,7 @@ import type { H3Event } from 'h3'
 import type { ZodType, ZodTypeDef } from 'zod'
 import type { ApiErrorData, ApiIssue } from '~~/utils/schemas/errors'
 import { findTextProblem } from '~~/utils/schemas/text'
-import { houseErrorMap } from '~~/utils/schemas/z'
+import { parseErrorMap } from '~~/utils/schemas/z'
 
 /**
  * The one error envelope of the API. Every refusal a route or server util makes goes through
@@ -75,7 +75,7 @@ function parseOr400<T>(schema: ZodType<T, ZodTypeDef, unknown>, input: unknown):
   const text = findTextProblem(input)
   if (text) badInput(text.field, text.message)
   // The house map passed here too: the bundler may hoist `z` from 'zod' past the module that sets it.
-  const result = schema.safeParse(input, { errorMap: houseErrorMap })
+  const result = schema.safeParse(input, { errorMap: parseErrorMap })
   if (result.success) return result.data
   // An issue with the body itself (a number, a list, null where an object belongs) names "body".
   const issues = result.error.issues.map(i => ({ field: i.path.join('.') || 'body', message: i.message }))

@@ -7,7 +7,7 @@ import { forgivingCsv, formulaSafeCsv, restoreCell } from '~~/utils/csv'
 import { plural } from '~~/utils/display'
 import { ShelfCsvRowSchema, shelfCsvColumns } from '~~/utils/schemas/shelf'
 import { CONTROL_CHARACTER_MESSAGE, hasControlCharacter } from '~~/utils/schemas/text'
-import { houseErrorMap } from '~~/utils/schemas/z'
+import { parseErrorMap } from '~~/utils/schemas/z'
 import type { ShelfImportSkip } from '~~/utils/vocabulary'
 import type { Database } from './database'
 import { visibleRecipes } from './catalogue'
@@ -91,7 +91,7 @@ export async function importShelfCsv(db: Database, householdId: string, userId: 
       skipped[jarsLeft > 0 ? 'on-shelf' : 'gone'] += 1
       return
     }
-    const parsed = ShelfCsvRowSchema.safeParse(raw, { errorMap: houseErrorMap })
+    const parsed = ShelfCsvRowSchema.safeParse(raw, { errorMap: parseErrorMap })
     if (!parsed.success) {
       for (const issue of parsed.error.issues) issues.push({ line, field: String(issue.path[0] ?? 'row'), message: issue.message })
       return

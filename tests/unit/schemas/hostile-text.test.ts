@@ -60,3 +60,14 @@ describe('plausible years', () => {
     expect(row.error!.issues.map(i => i.path.join('.'))).toEqual(['canned_on'])
   })
 })
+
+describe('the error map a request is parsed with', () => {
+  it('answers in house words where the global map is not set, and keeps an enum\'s own message', async () => {
+    const { z: bare } = await import('zod')
+    const { parseErrorMap } = await import('~~/utils/schemas/z')
+    const schema = bare.object({ gauge: bare.enum(['dial', 'weighted'], { errorMap: () => ({ message: 'Choose a dial gauge or a weighted gauge.' }) }), name: bare.string() })
+    const result = schema.safeParse({ gauge: 'spring', name: 5 }, { errorMap: parseErrorMap })
+    expect(result.error!.issues.map(i => i.message)).toEqual(['Choose a dial gauge or a weighted gauge.', 'Enter this as text.'])
+    expect(bare.string().safeParse(5, { errorMap: parseErrorMap }).error!.issues[0]!.message).toBe('Enter this as text.')
+  })
+})
