@@ -36,6 +36,32 @@ export function firstJarFor(recipe: CatalogueRecipe | undefined, jarSizes: reado
 /** The largest photo a load takes, checked by the photo route and, to spare a slow upload, by the page. */
 export const MAX_PHOTO_BYTES = 8 * 1024 * 1024
 
+/** The largest Shelf inventory CSV an import takes (about 2,000 lots with room to spare). */
+export const MAX_CSV_BYTES = 2 * 1024 * 1024
+
+/**
+ * The most a request body may hold, by the kind of route, enforced before the body is read
+ * (`server/middleware/02.body-limit.ts`): a Content-Length above it is refused at once, and a
+ * chunked body is counted as it streams and refused at the limit. A body that stops arriving
+ * (a Content-Length promising more than is sent) is cut off after `idleMs` without a byte, and
+ * any body after `totalMs`.
+ */
+export const BODY_LIMITS = {
+  json: 256 * 1024,
+  csvImport: MAX_CSV_BYTES + 64 * 1024,
+  /** The photo plus the multipart envelope around it. */
+  photoUpload: MAX_PHOTO_BYTES + 64 * 1024,
+  idleMs: 10_000,
+  totalMs: 120_000,
+} as const
+
+/**
+ * Every date and time a request carries (a load's times, the Logbook's range, a CSV's canned
+ * date, a gauge test) must fall in these years: PostgreSQL has no year 0, and a date near 9999
+ * overflows once a reminder or best-by date is added to it.
+ */
+export const PLAUSIBLE_YEARS = { first: 1970, last: 2200 } as const
+
 /** An invitation link stays good this long (then the owner resends it). */
 export const INVITATION_DAYS = 7
 /** A password-reset link stays good this long. */

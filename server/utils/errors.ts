@@ -1,6 +1,8 @@
 import type { H3Event } from 'h3'
 import type { ZodType, ZodTypeDef } from 'zod'
 import type { ApiErrorData, ApiIssue } from '~~/utils/schemas/errors'
+import { findTextProblem } from '~~/utils/schemas/text'
+import { parseErrorMap } from '~~/utils/schemas/z'
 
 /**
  * The one error envelope of the API. Every refusal a route or server util makes goes through
@@ -36,6 +38,10 @@ export function notFound(message: string): never {
 export function conflict(message: string, field?: string): never {
   return fail(409, message, field)
 }
+/** 408: the request body stopped arriving (or took too long). */
+export function timedOut(message: string, field?: string): never {
+  return fail(408, message, field)
+}
 /** 413: too large to take. */
 export function tooLarge(message: string, field?: string): never {
   return fail(413, message, field)
@@ -60,11 +66,19 @@ export function unavailable(message: string, field?: string): never {
   return fail(503, message, field)
 }
 
-/** Parse `input` with a zod schema; the first problem answers 400 with its field and message. */
+/**
+ * Parse `input` with a zod schema; the first problem answers 400 with its field and message.
+ * A control character anywhere in the input (or a hostile depth) is refused first, whatever
+ * the schema, so none reaches the database.
+ */
 function parseOr400<T>(schema: ZodType<T, ZodTypeDef, unknown>, input: unknown): T {
-  const result = schema.safeParse(input)
+  const text = findTextProblem(input)
+  if (text) badInput(text.field, text.message)
+  // The house map passed here too: the bundler may hoist `z` from 'zod' past the module that sets it.
+  const result = schema.safeParse(input, { errorMap: parseErrorMap })
   if (result.success) return result.data
-  const issues = result.error.issues.map(i => ({ field: i.path.join('.'), message: i.message }))
+  // An issue with the body itself (a number, a list, null where an object belongs) names "body".
+  const issues = result.error.issues.map(i => ({ field: i.path.join('.') || 'body', message: i.message }))
   const first = issues.find(i => i.field) ?? issues[0]!
   return badInput(first.field, first.message, issues)
 }

@@ -6,6 +6,8 @@ import { bestByDate } from '~~/utils/after'
 import { forgivingCsv, formulaSafeCsv, restoreCell } from '~~/utils/csv'
 import { plural } from '~~/utils/display'
 import { ShelfCsvRowSchema, shelfCsvColumns } from '~~/utils/schemas/shelf'
+import { CONTROL_CHARACTER_MESSAGE, hasControlCharacter } from '~~/utils/schemas/text'
+import { parseErrorMap } from '~~/utils/schemas/z'
 import type { ShelfImportSkip } from '~~/utils/vocabulary'
 import type { Database } from './database'
 import { visibleRecipes } from './catalogue'
@@ -54,6 +56,11 @@ export async function importShelfCsv(db: Database, householdId: string, userId: 
     const line = (error as { lines?: number }).lines ?? 1
     return { issues: [{ line, field: 'csv', message: `This is not readable CSV: ${(error as Error).message}` }] as CsvIssue[] }
   }
+  // Every cell, header included, before any is read: PostgreSQL text cannot hold a NUL.
+  const broken = records.flatMap((record, r) => record.flatMap((cell, c) => hasControlCharacter(cell)
+    ? [{ line: r + 1, field: r === 0 ? 'header' : (records[0]![c] ?? 'csv').toLowerCase().replace(/[^\w]/g, '') || 'csv', message: CONTROL_CHARACTER_MESSAGE }]
+    : []))
+  if (broken.length) return { issues: broken.slice(0, 50) as CsvIssue[] }
   const header = records[0]?.map(h => h.toLowerCase()) ?? []
   const missing = shelfCsvColumns.filter(c => ['product', 'jar_size', 'jars', 'canned_on'].includes(c) && !header.includes(c))
   if (!records.length || missing.length) {
@@ -84,7 +91,7 @@ export async function importShelfCsv(db: Database, householdId: string, userId: 
       skipped[jarsLeft > 0 ? 'on-shelf' : 'gone'] += 1
       return
     }
-    const parsed = ShelfCsvRowSchema.safeParse(raw)
+    const parsed = ShelfCsvRowSchema.safeParse(raw, { errorMap: parseErrorMap })
     if (!parsed.success) {
       for (const issue of parsed.error.issues) issues.push({ line, field: String(issue.path[0] ?? 'row'), message: issue.message })
       return

@@ -128,6 +128,7 @@ const ownHousehold = (who: Identity) => (who === 'stranger' || who === 'admin' ?
 
 const expectations: Record<string, Expectation> = {
   'GET /api/health': { access: 'public', call: () => ({ path: '/api/health' }) },
+  'GET /api/:...path': { access: 'public', everyone: 404, call: () => ({ path: '/api/no-such-request' }) },
   'POST /api/auth/login': { access: 'public', everyone: 401, call: who => ({ path: '/api/auth/login', body: { email: `nobody-${who}@example.org`, password: 'not the password' } }) },
   'POST /api/auth/register': { access: 'public', everyone: 409, call: () => ({ path: '/api/auth/register', body: { email: people.owner.email, password: 'another-long-password', name: 'Again', householdName: 'Again' } }) },
   'POST /api/auth/logout': { access: 'public', ownSession: true, call: () => ({ path: '/api/auth/logout' }) },

@@ -4,6 +4,7 @@
  */
 import { gaugeTypes, jarMouths, packStyles } from '../vocabulary'
 import { z } from './z'
+import { inPlausibleYears, isCalendarDate, PLAUSIBLE_YEARS_MESSAGE } from './fields'
 import { formatLength } from '../planning/units'
 import { gaugeTestWarning } from '../planning/process'
 import type { Canner, GaugeType } from '../planning/types'
@@ -180,7 +181,8 @@ export const CannerSchema = z.object({
   lastGaugeTestAt: z.preprocess(
     v => (v === '' ? null : v),
     z.string().regex(isoDate, 'Enter the date of the last gauge test, or leave it empty.')
-      .refine(d => !Number.isNaN(Date.parse(d)), 'That date does not exist.')
+      .refine(isCalendarDate, 'That date does not exist.')
+      .refine(inPlausibleYears, PLAUSIBLE_YEARS_MESSAGE)
       .nullable(),
   ).optional(),
 })

@@ -4,6 +4,7 @@
  * never read as 0 or as some other number, because the planner's pressure and times come from
  * these values.
  */
+import { PLAUSIBLE_YEARS } from '../defaults'
 import { z } from './z'
 
 interface NumberLimits {
@@ -35,4 +36,19 @@ export function queryWholeNumber(message: string, min: number, max: number) {
     .regex(/^\d+$/, message)
     .transform(Number)
     .pipe(z.number().int(message).min(min, message).max(max, message))
+}
+
+/** The year of an ISO date or instant, in UTC, within `PLAUSIBLE_YEARS` (false when unreadable). */
+export function inPlausibleYears(iso: string): boolean {
+  const ms = Date.parse(iso)
+  if (Number.isNaN(ms)) return false
+  const year = new Date(ms).getUTCFullYear()
+  return year >= PLAUSIBLE_YEARS.first && year <= PLAUSIBLE_YEARS.last
+}
+export const PLAUSIBLE_YEARS_MESSAGE = `Give a date between the years ${PLAUSIBLE_YEARS.first} and ${PLAUSIBLE_YEARS.last}.`
+
+/** A YYYY-MM-DD that is a day of the calendar (JavaScript reads "2026-02-30" as 2 March). */
+export function isCalendarDate(iso: string): boolean {
+  const ms = Date.parse(`${iso}T00:00:00Z`)
+  return !Number.isNaN(ms) && new Date(ms).toISOString().slice(0, 10) === iso
 }

@@ -2,13 +2,14 @@
 import { unsealedActions } from '../vocabulary'
 import { z } from './z'
 import { fromLocalInput, isLocalInput } from '../time'
-import { queryWholeNumber } from './fields'
+import { inPlausibleYears, isCalendarDate, PLAUSIBLE_YEARS_MESSAGE, queryWholeNumber } from './fields'
 
 const uuid = (what: string) => z.string({ required_error: `Choose the ${what}.`, invalid_type_error: `Choose the ${what}.` }).uuid(`That ${what} id is not valid.`)
 const ISO_DATE_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:\d{2})$/
 const instant = (what: string) => z.string({ required_error: `Enter when the load ${what}.`, invalid_type_error: `Enter when the load ${what}.` })
   .regex(ISO_DATE_TIME, `Enter when the load ${what} as a date and time.`)
-  .refine(s => !Number.isNaN(Date.parse(s)), 'That date does not exist.')
+  .refine(s => !Number.isNaN(Date.parse(s)) && isCalendarDate(s.slice(0, 10)), 'That date does not exist.')
+  .refine(inPlausibleYears, PLAUSIBLE_YEARS_MESSAGE)
 const wholeNumber = (message: string) => z.number({ required_error: message, invalid_type_error: message }).int(message)
 
 export const HouseholdLoadParamsSchema = z.object({ id: uuid('household'), loadId: uuid('load') })
@@ -101,7 +102,8 @@ export type LoadUpdateInput = z.infer<typeof LoadUpdateSchema>
 export const loadSortKeys = ['startedAt', 'code', 'canner', 'jars', 'pressurePsi', 'processMinutes'] as const
 export type LoadSortKey = (typeof loadSortKeys)[number]
 const SORT = new RegExp(`^-?(${loadSortKeys.join('|')})$`)
-const dateOnly = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Give the date as YYYY-MM-DD.').refine(s => !Number.isNaN(Date.parse(s)), 'That date does not exist.')
+const dateOnly = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Give the date as YYYY-MM-DD.').refine(isCalendarDate, 'That date does not exist.')
+  .refine(inPlausibleYears, PLAUSIBLE_YEARS_MESSAGE)
 
 export const LoadListQuerySchema = z.object({
   page: queryWholeNumber('Give the page as a whole number from 1.', 1, 10_000).default('1'),

@@ -1,5 +1,6 @@
 import { planStatuses, soakMethods } from '../vocabulary'
 import { z } from './z'
+import { inPlausibleYears, PLAUSIBLE_YEARS_MESSAGE } from './fields'
 
 const positiveWhole = (what: string, max: number) =>
   z.number({ invalid_type_error: `Enter ${what} as a number.` }).int(`Enter ${what} as a whole number.`).positive(`${what[0]!.toUpperCase()}${what.slice(1)} must be more than 0.`).max(max, `That is more ${what} than one plan can hold (${max}).`)
@@ -46,7 +47,8 @@ export const PlanLineSchema = z.object({
 export const PlanRequestSchema = z.object({
   cannerId: z.string().uuid('Choose a canner.').optional(),
   cannerIds: z.array(z.string().uuid('Choose a canner.')).min(1).max(2, 'At most two canners run side by side.').optional(),
-  startAt: z.string().regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:\d{2})?$/, 'Give the start as a date and time, e.g. 2026-12-05T08:00.').optional(),
+  startAt: z.string().regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:\d{2})?$/, 'Give the start as a date and time, e.g. 2026-12-05T08:00.')
+    .refine(inPlausibleYears, PLAUSIBLE_YEARS_MESSAGE).optional(),
   soak: z.enum(soakMethods, { errorMap: () => ({ message: 'Choose the overnight soak or the quick soak.' }) }).optional(),
   altitudeFt: z.number({ invalid_type_error: 'Enter the altitude in feet.' }).int('Enter whole feet.').min(-1500).max(30_000).optional(),
   lines: z.array(PlanLineSchema).min(1, 'Add at least one recipe.').max(12, 'At most 12 lines in one plan.'),

@@ -1,6 +1,6 @@
 /** Schemas of the Shelf: taking jars off, correcting a lot, labels and the inventory CSV. */
 import { labelLayouts, shelfCorrectionCauses } from '../vocabulary'
-import { numberField, queryWholeNumber } from './fields'
+import { inPlausibleYears, numberField, PLAUSIBLE_YEARS_MESSAGE, queryWholeNumber } from './fields'
 import { z } from './z'
 
 const uuid = (what: string) => z.string({ required_error: `Choose the ${what}.`, invalid_type_error: `Choose the ${what}.` }).uuid(`That ${what} id is not valid.`)
@@ -59,6 +59,7 @@ export const shelfCsvColumns = ['product', 'recipe_id', 'jar_size', 'jars', 'can
 const isoDate = (what: string) => z.string().trim()
   .regex(/^\d{4}-\d{2}-\d{2}$/, `Write the ${what} as YYYY-MM-DD.`)
   .refine(s => !Number.isNaN(Date.parse(s)) && new Date(s).toISOString().slice(0, 10) === s, 'That date does not exist.')
+  .refine(inPlausibleYears, PLAUSIBLE_YEARS_MESSAGE)
 
 /** One row of an imported inventory, before the jar size and recipe are checked against the catalogue. */
 export const ShelfCsvRowSchema = z.object({

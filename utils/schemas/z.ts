@@ -4,7 +4,7 @@
  * characters") instead of zod's defaults ("String must contain at most 80 character(s)").
  * The map applies wherever a schema runs: the API routes and the forms.
  */
-import { z, ZodIssueCode, type ZodErrorMap } from 'zod'
+import { defaultErrorMap, z, ZodIssueCode, type ZodErrorMap } from 'zod'
 
 const plural = (n: number | bigint, one: string, many: string) => `${n.toLocaleString('en-US')} ${Number(n) === 1 ? one : many}`
 
@@ -46,5 +46,15 @@ export const houseErrorMap: ZodErrorMap = (issue, ctx) => {
 }
 
 z.setErrorMap(houseErrorMap)
+
+/**
+ * The house map to pass to a parse (`safeParse(input, { errorMap: parseErrorMap })`) where the
+ * global one may not be set: the bundler can import `z` straight from zod, past this module. A
+ * message a schema's own errorMap gave (an enum's) is kept.
+ */
+export const parseErrorMap: ZodErrorMap = (issue, ctx) =>
+  ctx.defaultError !== defaultErrorMap(issue, { ...ctx, defaultError: '' }).message && ctx.defaultError !== houseErrorMap(issue, ctx).message
+    ? { message: ctx.defaultError }
+    : houseErrorMap(issue, ctx)
 
 export { z }

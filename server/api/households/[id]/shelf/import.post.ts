@@ -1,3 +1,4 @@
+import { MAX_CSV_BYTES } from '~~/utils/defaults'
 import { HouseholdParamsSchema } from '~~/utils/schemas/household'
 
 /**
@@ -9,11 +10,13 @@ import { HouseholdParamsSchema } from '~~/utils/schemas/household'
 export default defineEventHandler(async (event) => {
   const { params: { id }, db, user } = await requireHouseholdRole(event, HouseholdParamsSchema, 'canner')
   const type = getRequestHeader(event, 'content-type') ?? ''
-  const text = type.includes('json') ? (await readBody<{ csv?: unknown }>(event))?.csv : await readRawBody(event, 'utf8')
+  const text = type.includes('json')
+    ? (await readBody<{ csv?: unknown } | null>(event).catch(() => badInput('body', 'Send the inventory as JSON { csv } or as text/csv.')))?.csv
+    : await readRawBody(event, 'utf8')
   if (typeof text !== 'string' || !text.trim()) {
     badInput('csv', 'Send the inventory as CSV text.')
   }
-  if (text.length > 2_000_000) tooLarge('That file is larger than 2 MB; split it.', 'csv')
+  if (Buffer.byteLength(text) > MAX_CSV_BYTES) tooLarge('That file is larger than 2 MB; split it.', 'csv')
   const result = await importShelfCsv(db, id, user.id, text)
   if (result.imported === undefined) {
     const first = result.issues[0]!

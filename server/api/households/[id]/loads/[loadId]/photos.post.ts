@@ -2,12 +2,11 @@ import { HouseholdLoadParamsSchema } from '~~/utils/schemas/logbook'
 
 /**
  * Attach a photo to a load (canner and up): multipart field "photo", JPEG, PNG or WebP by its
- * content (magic bytes), at most 8 MB.
+ * content (magic bytes), at most 8 MB. The body was counted as it streamed and refused past the
+ * limit before it reached here (`server/utils/bodyLimit.ts`).
  */
 export default defineEventHandler(async (event) => {
   const { params: { id, loadId }, db, user } = await requireHouseholdRole(event, HouseholdLoadParamsSchema, 'canner')
-  const declared = Number(getRequestHeader(event, 'content-length') ?? 0)
-  if (declared > MAX_PHOTO_BYTES + 64 * 1024) tooLarge('That photo is larger than 8 MB. Send a smaller one (phones can share a reduced size).', 'photo')
   await requireLoad(db, id, loadId)
   const parts = await readMultipartFormData(event)
   const file = parts?.find(p => p.name === 'photo' && p.filename !== undefined)
