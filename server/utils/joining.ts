@@ -59,6 +59,13 @@ export async function acceptInvitation(event: H3Event, db: Database, token: stri
   if (body.mode === 'sign-in') {
     await spend(event, 'signInPerClient', clientAddress(event), 'sign-in attempts from this device')
     await refuseIfSpent(event, 'wrongPasswordPerAddress', email, 'wrong passwords for this address')
+    // The password is checked, and a wrong one counted, before the transaction: the counts are in
+    // the database too, and PGlite's one connection is the transaction's until it ends.
+    const [account] = await db.select({ passwordHash: tables.users.passwordHash }).from(tables.users).where(sql`lower(${tables.users.email}) = ${email}`)
+    if (!await passwordMatches(account?.passwordHash, body.password) || !account) {
+      await spend(event, 'wrongPasswordPerAddress', email, 'wrong passwords for this address')
+      unauthorized(`That password does not match the account for ${email}.`)
+    }
   }
 
   const user = await db.transaction(async (tx) => {
@@ -74,10 +81,8 @@ export async function acceptInvitation(event: H3Event, db: Database, token: stri
       user = existing!
     }
     else if (body.mode === 'sign-in') {
-      if (!await passwordMatches(existing?.passwordHash, body.password) || !existing) {
-        await spend(event, 'wrongPasswordPerAddress', email, 'wrong passwords for this address')
-        unauthorized(`That password does not match the account for ${email}.`)
-      }
+      // checked above; gone meanwhile only if the account was deleted in between
+      if (!existing) unauthorized(`That password does not match the account for ${email}.`)
       user = existing
     }
     else {
