@@ -119,10 +119,13 @@ describe('after the canning day', () => {
     await page.goto(`${server.url}/logbook`)
     await page.getByRole('button', { name: 'Jars', exact: true }).click()
     await page.waitForURL(/sort=-?jars/)
-    const jarCells = await page.locator('tbody tr td:nth-child(4)').allTextContents()
-    const counts = jarCells.map(t => Number(t.trim()))
-    expect(counts.length).toBeGreaterThan(1)
-    expect([...counts].sort((a, b) => a - b).join()).toSatisfy((asc: string) => asc === counts.join() || [...counts].reverse().join() === asc)
+    // The address changes first; the rows follow when the server's sorted page arrives.
+    const jarCounts = async () => (await page.locator('tbody tr td:nth-child(4)').allTextContents()).map(t => Number(t.trim()))
+    const inOrder = (counts: number[]) => {
+      const asc = [...counts].sort((a, b) => a - b).join()
+      return counts.length > 1 && (asc === counts.join() || asc === [...counts].reverse().join())
+    }
+    await expect.poll(async () => inOrder(await jarCounts()), { timeout: 10_000 }).toBe(true)
     const phone = await browser.newPage({ viewport: { width: 390, height: 844 } })
     await signIn(phone, server.url, 'helper@demo.shelfstead.test')
     const shelfHeading = await visible(phone.getByRole('heading', { name: 'On the shelf' }))
