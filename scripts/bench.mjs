@@ -10,11 +10,11 @@
 //  --smoke: short durations (a check that the bench still runs), --no-build: use .output as is.
 import { spawn, spawnSync } from 'node:child_process'
 import { mkdtempSync } from 'node:fs'
-import { createServer } from 'node:net'
 import { join, resolve } from 'node:path'
 import { cpus, tmpdir, totalmem } from 'node:os'
 import autocannon from 'autocannon'
 import { mixedLoad, startServers } from './lib/load.mjs'
+import { freePort } from './lib/ports.mjs'
 import { postgresBin, startPostgres } from './lib/postgres-cluster.mjs'
 
 const env = { ...process.env, NUXT_TELEMETRY_DISABLED: '1' }
@@ -31,12 +31,7 @@ if (!process.argv.includes('--no-build')) {
   if (build.status !== 0) process.exit(build.status ?? 1)
 }
 
-const port = await new Promise((done) => {
-  const probe = createServer().listen(0, '127.0.0.1', () => {
-    const { port } = probe.address()
-    probe.close(() => done(port))
-  })
-})
+const port = await freePort()
 const base = `http://127.0.0.1:${port}`
 const server = spawn(process.execPath, [join(output, 'server/index.mjs')], {
   env: { ...env, PORT: String(port), HOST: '127.0.0.1', NUXT_DATA_DIR: mkdtempSync(join(tmpdir(), 'shelfstead-bench-')), SHELFSTEAD_DEMO: '1' },

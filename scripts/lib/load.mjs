@@ -4,19 +4,10 @@
 import { spawn } from 'node:child_process'
 import { randomBytes } from 'node:crypto'
 import { mkdtempSync } from 'node:fs'
-import { createServer } from 'node:net'
+import { freePort } from './ports.mjs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import hdr from 'hdr-histogram-js'
-
-function freePort() {
-  return new Promise((done) => {
-    const probe = createServer().listen(0, '127.0.0.1', () => {
-      const { port } = probe.address()
-      probe.close(() => done(port))
-    })
-  })
-}
 
 /** Start `count` built servers on one database (PGlite when `databaseUrl` is unset; then count must be 1). */
 export async function startServers(output, { count = 1, databaseUrl } = {}) {

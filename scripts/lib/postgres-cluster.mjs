@@ -2,7 +2,7 @@
 // tests and the benchmarks. Debian refuses initdb as root, so as root it runs as the postgres user.
 import { execFileSync, spawn } from 'node:child_process'
 import { chmodSync, existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs'
-import { createServer } from 'node:net'
+import { freePort } from './ports.mjs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 
@@ -11,16 +11,6 @@ export function postgresBin() {
   const root = '/usr/lib/postgresql'
   const versions = existsSync(root) ? readdirSync(root).sort((a, b) => Number(b) - Number(a)) : []
   return versions.map(v => join(root, v, 'bin')).find(b => existsSync(join(b, 'initdb')))
-}
-
-function freePort() {
-  return new Promise((done, fail) => {
-    const probe = createServer()
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address()
-      probe.close(() => (typeof address === 'object' && address ? done(address.port) : fail(new Error('no port'))))
-    })
-  })
 }
 
 /** Start a cluster with one database `shelfstead`; `stop()` ends it and removes its files. */

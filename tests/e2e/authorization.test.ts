@@ -8,10 +8,9 @@
  * the role check, not validation, is what refuses; refused callers must never get a 2xx, and
  * another household's rows answer 404.
  */
-import { readdirSync, statSync } from 'node:fs'
-import { join, relative } from 'node:path'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { ApiClient, startServer, type RunningServer } from '../support/server'
+import { routesFromFiles } from '../support/routes'
 import { ago, joinByInvitation, newHousehold, type TestHousehold } from '../support/household'
 import { libraryRecipe } from '../support/recipes'
 
@@ -217,17 +216,6 @@ const expectations: Record<string, Expectation> = {
   'GET /api/households/:id/shelf/lots/:lotId': { access: 'helper', call: () => ({ path: hh(`/shelf/lots/${ids.lot}`) }) },
   'POST /api/households/:id/shelf/lots/:lotId/correction': { access: 'canner', call: async () => ({ path: hh(`/shelf/lots/${await freshLot()}/correction`), body: { jarsLeft: 4, cause: 'broken' } }) },
   'POST /api/households/:id/shelf/fridge/:itemId/clear': { access: 'helper', call: async () => ({ path: hh(`/shelf/fridge/${await freshFridgeItem()}/clear`) }) },
-}
-
-/** "POST /api/households/:id/loads" for each file under server/api. */
-function routesFromFiles(dir = 'server/api'): string[] {
-  return readdirSync(dir).flatMap((name) => {
-    const path = join(dir, name)
-    if (statSync(path).isDirectory()) return routesFromFiles(path)
-    const m = relative('server', path).match(/^(.*?)(?:\.(get|post|put|patch|delete))?\.ts$/)!
-    const route = `/${m[1]!}`.replace(/\/index$/, '').replace(/\[([^\]]+)\]/g, ':$1')
-    return [`${(m[2] ?? 'get').toUpperCase()} ${route}`]
-  })
 }
 
 /** What a caller must get from a route: a status, or "allowed" (anything but a refusal or a 5xx). */

@@ -6,11 +6,10 @@
  * stored data (its list routes) unchanged by a 4xx. Then the limits one by one: oversized and
  * lying bodies, uploads, NULs in the fields the issue names, implausible dates.
  */
-import { readdirSync, statSync } from 'node:fs'
-import { join, relative } from 'node:path'
 import fc from 'fast-check'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { ApiClient, startServer, type RunningServer } from '../support/server'
+import { routesFromFiles } from '../support/routes'
 import { ago } from '../support/household'
 import { libraryRecipe } from '../support/recipes'
 import { CHUNKED_END, chunkedBody, rawRequest, residentBytes } from '../support/raw-http'
@@ -24,17 +23,6 @@ let H: string
 const ids = {} as Record<string, string>
 const port = () => Number(new URL(server.url).port)
 const tally = { sent: 0, refused: 0, accepted: 0 }
-
-/** "POST /api/households/:id/loads" for each file under server/api (as the authorization matrix reads them). */
-function routesFromFiles(dir = 'server/api'): string[] {
-  return readdirSync(dir).flatMap((name) => {
-    const path = join(dir, name)
-    if (statSync(path).isDirectory()) return routesFromFiles(path)
-    const m = relative('server', path).match(/^(.*?)(?:\.(get|post|put|patch|delete))?\.ts$/)!
-    const route = `/${m[1]!}`.replace(/\/index$/, '').replace(/\[([^\]]+)\]/g, ':$1')
-    return [`${(m[2] ?? 'get').toUpperCase()} ${route}`]
-  })
-}
 
 const planRequest = () => ({ cannerId: ids.canner, lines: [{ recipeId: 'usda-dried-beans-hot-pack', jarSizeId: 'pint-regular', jars: 9 }] })
 const houseRecipe = { name: 'Dry-packed pintos', basedOnRecipeId: 'usda-dried-beans-hot-pack', ingredientId: 'pinto-beans', packStyle: 'dry', headspaceMm: 25.4, solidsFillFraction: 0.75, steps: 'Measure no more than the fill cap.', note: 'Ours.', jars: [{ sizeKey: 'pint', saltTsp: 0.25 }] }
